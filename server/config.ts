@@ -1,0 +1,95 @@
+import crypto from 'node:crypto';
+import path from 'node:path';
+
+export type Config = {
+  nodeEnv: 'development' | 'test' | 'production';
+  port: number;
+  host: string;
+  databaseUrl: string;
+  sessionSecret: string;
+  /** Express "trust proxy" setting: true behind a TLS-terminating proxy, so Secure cookies work. */
+  trustProxy: boolean;
+  seedDemo: boolean;
+  /** Folder with the exported web app; the server serves it when it exists. */
+  webDir: string;
+  bcryptCost: number;
+};
+
+export class ConfigError extends Error {
+  constructor(readonly problems: string[]) {
+    super(`Configuration is not valid:\n${problems.map((p) => `  - ${p}`).join('\n')}`);
+    this.name = 'ConfigError';
+  }
+}
+
+const NODE_ENVS = ['development', 'test', 'production'] as const;
+
+function parseBool(value: string | undefined, fallback: boolean, name: string, problems: string[]): boolean {
+  if (value === undefined || value === '') return fallback;
+  if (['1', 'true', 'yes'].includes(value.toLowerCase())) return true;
+  if (['0', 'false', 'no'].includes(value.toLowerCase())) return false;
+  problems.push(`${name} must be true or false (got "${value}")`);
+  return fallback;
+}
+
+/**
+ * Reads and validates the environment. Collects every problem before failing so one start
+ * tells the operator everything that is wrong.
+ */
+export function loadConfig(env: NodeJS.ProcessEnv = process.env, warn: (msg: string) => void = console.warn): Config {
+  const problems: string[] = [];
+
+  const nodeEnvRaw = env.NODE_ENV ?? 'development';
+  if (!(NODE_ENVS as readonly string[]).includes(nodeEnvRaw)) {
+    problems.push(`NODE_ENV must be one of ${NODE_ENVS.join(', ')} (got "${nodeEnvRaw}")`);
+  }
+  const nodeEnv = ((NODE_ENVS as readonly string[]).includes(nodeEnvRaw) ? nodeEnvRaw : 'development') as Config['nodeEnv'];
+
+  const portRaw = env.PORT ?? '8080';
+  const port = Number(portRaw);
+  if (!Number.isInteger(port) || port < 0 || port > 65535) {
+    problems.push(`PORT must be a whole number from 0 to 65535 (got "${portRaw}")`);
+  }
+
+  const databaseUrl = env.DATABASE_URL ?? 'sqlite:data/junctura.sqlite';
+  if (!/^sqlite:/.test(databaseUrl)) {
+    problems.push(`DATABASE_URL must start with sqlite: (got "${databaseUrl}")`);
+  }
+
+  let sessionSecret = env.SESSION_SECRET ?? '';
+  if (!sessionSecret) {
+    if (nodeEnv === 'production') {
+      problems.push('SESSION_SECRET is required in production (a long random string)');
+    } else {
+      sessionSecret = crypto.randomBytes(32).toString('hex');
+      if (nodeEnv === 'development') {
+        warn('SESSION_SECRET is not set: using a random one for this run (sessions end when the server restarts).');
+      }
+    }
+  } else if (nodeEnv === 'production' && sessionSecret.length < 32) {
+    problems.push('SESSION_SECRET must be at least 32 characters in production');
+  }
+
+  const bcryptCostRaw = env.BCRYPT_COST ?? (nodeEnv === 'test' ? '4' : '12');
+  const bcryptCost = Number(bcryptCostRaw);
+  if (!Number.isInteger(bcryptCost) || bcryptCost < 4 || bcryptCost > 15) {
+    problems.push(`BCRYPT_COST must be a whole number from 4 to 15 (got "${bcryptCostRaw}")`);
+  } else if (nodeEnv === 'production' && bcryptCost < 10) {
+    problems.push('BCRYPT_COST must be at least 10 in production');
+  }
+
+  const config: Config = {
+    nodeEnv,
+    port,
+    host: env.HOST ?? '0.0.0.0',
+    databaseUrl,
+    sessionSecret,
+    trustProxy: parseBool(env.TRUST_PROXY, false, 'TRUST_PROXY', problems),
+    seedDemo: parseBool(env.SEED_DEMO, true, 'SEED_DEMO', problems),
+    webDir: path.resolve(env.WEB_DIR ?? 'dist'),
+    bcryptCost,
+  };
+
+  if (problems.length > 0) throw new ConfigError(problems);
+  return config;
+}
