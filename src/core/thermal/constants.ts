@@ -1,0 +1,25 @@
+/** Named tolerances and limits of the thermal core (dimensionless unless stated). */
+
+/** Roots of exponential sums are refined until the bracket is this fraction of the segment. */
+export const ROOT_TIME_REL_TOL = 1e-14;
+
+/** Iteration cap of the safeguarded Newton refinement (bisection alone needs ~50). */
+export const ROOT_MAX_ITERATIONS = 200;
+
+/** Modal rates closer than this (relative) are merged before searching for roots. */
+export const RATE_MERGE_REL_TOL = 1e-12;
+
+/**
+ * An interior peak search runs only when the cheap upper bound of a segment exceeds the
+ * best value known so far by more than this, K. Below it a peak cannot change the answer.
+ */
+export const PEAK_SEARCH_ABS_TOL = 1e-12;
+
+/** Above this λmax/λmin the eigen decomposition cannot resolve the slowest mode. */
+export const STIFFNESS_LIMIT = 1e13;
+
+/** Foster terms whose τ differ by less than this (relative) are merged. */
+export const FOSTER_TAU_MERGE_REL_TOL = 1e-12;
+
+/** Lanczos stops (the ladder is complete) when a new direction is this small, relative. */
+export const LANCZOS_BREAKDOWN_REL_TOL = 1e-13;
