@@ -3,7 +3,18 @@ const nodeProject = (displayName, roots) => ({
   displayName,
   testEnvironment: 'node',
   testMatch: roots.map((r) => `<rootDir>/__tests__/${r}/**/*.test.ts`),
-  transform: { '^.+\\.[jt]sx?$': 'babel-jest' },
+  // Plain TypeScript for Node: Expo's preset strips Flow and rejects `declare` class fields.
+  transform: {
+    '^.+\\.[jt]sx?$': [
+      'babel-jest',
+      {
+        babelrc: false,
+        configFile: false,
+        presets: [['@babel/preset-typescript', { allowDeclareFields: true }]],
+        plugins: ['@babel/plugin-transform-modules-commonjs'],
+      },
+    ],
+  },
   moduleNameMapper: { '^@/(.*)$': '<rootDir>/src/$1' },
 });
 
