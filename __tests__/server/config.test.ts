@@ -1,0 +1,30 @@
+import { ConfigError, loadConfig } from '../../server/config';
+
+describe('loadConfig', () => {
+  it('uses the documented defaults in development and warns about the generated secret', () => {
+    const warnings: string[] = [];
+    const config = loadConfig({}, (m) => warnings.push(m));
+    expect(config.port).toBe(8080);
+    expect(config.databaseUrl).toBe('sqlite:data/junctura.sqlite');
+    expect(config.sessionSecret).toHaveLength(64);
+    expect(warnings.join()).toMatch(/SESSION_SECRET/);
+  });
+
+  it('fails in production without a secret, listing every problem at once', () => {
+    let error: unknown;
+    try {
+      loadConfig({ NODE_ENV: 'production', PORT: 'eighty', BCRYPT_COST: '8' });
+    } catch (e) {
+      error = e;
+    }
+    expect(error).toBeInstanceOf(ConfigError);
+    const problems = (error as ConfigError).problems.join('\n');
+    expect(problems).toMatch(/SESSION_SECRET is required/);
+    expect(problems).toMatch(/PORT must be/);
+    expect(problems).toMatch(/BCRYPT_COST must be at least 10/);
+  });
+
+  it('rejects a database URL of another kind', () => {
+    expect(() => loadConfig({ NODE_ENV: 'test', DATABASE_URL: 'mysql://x' })).toThrow(/DATABASE_URL/);
+  });
+});
