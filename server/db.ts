@@ -12,6 +12,33 @@ export function sqliteStorage(databaseUrl: string): string {
   return path.resolve(rest);
 }
 
+type SqliteConnection = {
+  run: (sql: string, cb: (err: Error | null) => void) => void;
+  configure: (option: 'busyTimeout', ms: number) => void;
+  juncturaConfigured?: boolean;
+};
+
+const BUSY_TIMEOUT_MS = 5000;
+
+/**
+ * Sequelize's SQLite dialect opens one connection per transaction and runs no afterConnect
+ * hooks, so each new connection gets WAL mode (readers go on while a write commits) and a busy
+ * timeout (waits out short write locks instead of failing) here.
+ */
+function configureSqliteConnections(sequelize: Sequelize) {
+  const manager = sequelize.connectionManager as unknown as { getConnection: (o?: unknown) => Promise<SqliteConnection> };
+  const open = manager.getConnection.bind(manager);
+  manager.getConnection = async (options) => {
+    const connection = await open(options);
+    if (!connection.juncturaConfigured) {
+      connection.juncturaConfigured = true;
+      connection.configure('busyTimeout', BUSY_TIMEOUT_MS);
+      await new Promise<void>((resolve, reject) => connection.run('PRAGMA journal_mode = WAL', (e) => (e ? reject(e) : resolve())));
+    }
+    return connection;
+  };
+}
+
 /** Creates the Sequelize instance and models. Opens no connection until first used. */
 export function createDb(databaseUrl: string): Db {
   const storage = sqliteStorage(databaseUrl);
@@ -23,15 +50,6 @@ export function createDb(databaseUrl: string): Db {
     pool: { max: 1, min: 0, idle: 10_000 },
     retry: { max: 5, match: [/SQLITE_BUSY/] },
   });
-  // WAL lets readers carry on while a write commits; the busy timeout waits out short locks.
-  sequelize.addHook('afterConnect', async (connection) => {
-    const run = (sql: string) =>
-      new Promise<void>((resolve, reject) =>
-        (connection as { run: (s: string, cb: (e: Error | null) => void) => void }).run(sql, (e) => (e ? reject(e) : resolve())),
-      );
-    await run('PRAGMA journal_mode = WAL');
-    await run('PRAGMA busy_timeout = 5000');
-    await run('PRAGMA foreign_keys = ON');
-  });
+  configureSqliteConnections(sequelize);
   return { sequelize, models: initModels(sequelize) };
 }
