@@ -1,6 +1,7 @@
 import fs from 'node:fs';
 import path from 'node:path';
 import connectSessionSequelize from 'connect-session-sequelize';
+import cors from 'cors';
 import express from 'express';
 import session from 'express-session';
 import helmet from 'helmet';
@@ -57,6 +58,7 @@ export function createApp(config: Config, db: Db = createDb(config.databaseUrl))
     }),
   );
 
+  if (config.corsOrigins.length > 0) app.use('/api', cors({ origin: config.corsOrigins, credentials: true }));
   app.use('/api', apiRouter(db, config));
   app.use('/api', (req, _res, next) => next(new AppError(404, 'not_found', `No route for ${req.method} /api${req.path}`)));
 

@@ -13,6 +13,8 @@ export type Config = {
   /** Folder with the exported web app; the server serves it when it exists. */
   webDir: string;
   bcryptCost: number;
+  /** Origins allowed to call the API with cookies from another port (the Expo dev server). */
+  corsOrigins: string[];
 };
 
 export class ConfigError extends Error {
@@ -36,7 +38,7 @@ function parseBool(value: string | undefined, fallback: boolean, name: string, p
  * Reads and validates the environment. Collects every problem before failing so one start
  * tells the operator everything that is wrong.
  */
-export function loadConfig(env: NodeJS.ProcessEnv = process.env, warn: (msg: string) => void = console.warn): Config {
+export function loadConfig(env: Record<string, string | undefined> = process.env, warn: (msg: string) => void = console.warn): Config {
   const problems: string[] = [];
 
   const nodeEnvRaw = env.NODE_ENV ?? 'development';
@@ -88,7 +90,11 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env, warn: (msg: str
     seedDemo: parseBool(env.SEED_DEMO, true, 'SEED_DEMO', problems),
     webDir: path.resolve(env.WEB_DIR ?? 'dist'),
     bcryptCost,
+    corsOrigins: (env.CORS_ORIGINS ?? '').split(',').map((o) => o.trim()).filter(Boolean),
   };
+  for (const origin of config.corsOrigins) {
+    if (!/^https?:\/\/[^/]+$/.test(origin)) problems.push(`CORS_ORIGINS entries must look like http://host:port (got "${origin}")`);
+  }
 
   if (problems.length > 0) throw new ConfigError(problems);
   return config;
