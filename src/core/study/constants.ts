@@ -1,0 +1,35 @@
+/** Named tolerances and limits of the study pipeline (one place, so they are stated once). */
+
+/** Target junction margin below Tj,max when a study gives none: 20–25 K is common practice. */
+export const DEFAULT_MARGIN_K = 20;
+
+/**
+ * Re-linearisation tolerance of natural convection: a stretch is split where the sink rise
+ * moves Rθsa by more than this fraction from the value the stretch was solved with.
+ */
+export const CONVECTION_TOLERANCE = 0.01;
+
+/** Below this rise natural-convection Rθsa is held at its value here (it tends to ∞ at zero rise). */
+export const MIN_CONVECTION_RISE_K = 0.5;
+
+/** A linear ambient ramp is held constant over pieces whose ends differ by at most this. */
+export const AMBIENT_RAMP_STEP_K = 0.05;
+
+/** Most segments a profile may expand to (groups × repeat). */
+export const MAX_EXPANDED_SEGMENTS = 10_000_000;
+
+/** Most constant-input pieces one evaluation may solve (events and splits included). */
+export const MAX_SOLVED_PIECES = 50_000_000;
+
+/** Chart series: at most this many points per node. */
+export const DEFAULT_SERIES_POINTS = 2000;
+
+/** Events kept in the result list; later ones are only counted. */
+export const MAX_LISTED_EVENTS = 2000;
+
+/** Iterated periodic steady state (with events or non-linear sinks): stop when a period's start moves less than this. */
+export const PERIODIC_TOLERANCE_K = 1e-6;
+export const MAX_PERIODIC_ITERATIONS = 2000;
+
+/** Every node must end at or below this; a higher value means the inputs are not physical. */
+export const MAX_PLAUSIBLE_TEMPERATURE_C = 1e6;

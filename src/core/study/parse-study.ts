@@ -1,0 +1,106 @@
+import { STUDY_FORMAT, STUDY_VERSION, type Device, type Sink, type StudyDocument } from './types';
+import {
+  asArray,
+  asObject,
+  fieldPath,
+  findNonFinite,
+  onlyKeys,
+  rangeFail,
+  readOptionalNumber,
+  readOptionalString,
+  readString,
+  typeFail,
+} from './field-reader';
+import { parseAmbient, parseEnclosure } from './parse-ambient';
+import { parseSink } from './parse-sink';
+import { parseDevice } from './parse-device';
+import { parseProfile } from './parse-profile';
+import { DEFAULT_MARGIN_K } from './constants';
+
+const TOP_KEYS = ['format', 'version', 'title', 'description', 'notes', 'marginK', 'ambient', 'enclosure', 'sinks', 'devices', 'profile'];
+const RESERVED_IDS = ['ambient', 'enclosure'];
+
+function checkUniqueIds(items: { id: string }[], listPath: string, taken: Map<string, string>): void {
+  items.forEach((item, i) => {
+    const path = fieldPath(fieldPath(listPath, i), 'id');
+    if (RESERVED_IDS.includes(item.id)) rangeFail(path, `${JSON.stringify(item.id)} is reserved; choose another id`);
+    const first = taken.get(item.id);
+    if (first !== undefined) rangeFail(path, `duplicate id ${JSON.stringify(item.id)} (already used by ${first})`);
+    taken.set(item.id, fieldPath(listPath, i));
+  });
+}
+
+/** Every sink's Rθsa chain must end at the ambient (through the enclosure when there is one). */
+function checkSinkPaths(sinks: Sink[], hasEnclosure: boolean): void {
+  const index = new Map(sinks.map((s, i) => [s.id, i]));
+  sinks.forEach((sink, i) => {
+    const path = fieldPath(fieldPath('sinks', i), 'to');
+    if (sink.to === 'ambient') return;
+    if (sink.to === 'enclosure') {
+      if (!hasEnclosure) rangeFail(path, 'leads to "enclosure" but the study has no enclosure');
+      return;
+    }
+    if (!index.has(sink.to)) rangeFail(path, `no sink has the id ${JSON.stringify(sink.to)} (use a sink id, "enclosure" or "ambient")`);
+    if (sink.to === sink.id) rangeFail(path, 'a sink cannot lead to itself: it would have no path to ambient');
+  });
+  sinks.forEach((sink, i) => {
+    const chain = [sink.id];
+    let at = sink;
+    while (at.to !== 'ambient' && at.to !== 'enclosure') {
+      at = sinks[index.get(at.to)!];
+      if (chain.includes(at.id)) {
+        rangeFail(fieldPath(fieldPath('sinks', i), 'to'), `the sinks ${[...chain, at.id].join(' → ')} form a loop with no path to ambient`);
+      }
+      chain.push(at.id);
+    }
+  });
+}
+
+function checkDeviceSinks(devices: Device[], sinks: Sink[]): void {
+  const ids = new Set(sinks.map((s) => s.id));
+  devices.forEach((device, i) => {
+    if (!ids.has(device.sink)) {
+      rangeFail(fieldPath(fieldPath('devices', i), 'sink'), `no sink has the id ${JSON.stringify(device.sink)} (sinks: ${[...ids].join(', ')})`);
+    }
+  });
+}
+
+/**
+ * Checks a study document (format "junctura-study", version 1) and returns it with defaults
+ * filled in and profile groups expanded. Throws a TypeError (wrong type, missing or unknown
+ * field) or RangeError (value out of range, broken reference) whose message starts with the
+ * field's path, e.g. `devices[1].package.terms[0].tauS: must be greater than zero, got -1 s`.
+ */
+export function parseStudy(json: unknown): StudyDocument {
+  const root = asObject(json, '');
+  const format = readString(root, 'format', '');
+  if (format !== STUDY_FORMAT) rangeFail('format', `must be "${STUDY_FORMAT}", got ${JSON.stringify(format)}`);
+  if (root.version === undefined) typeFail('version', 'is required');
+  if (root.version !== STUDY_VERSION) {
+    rangeFail('version', `must be ${STUDY_VERSION} (the only version this program reads), got ${JSON.stringify(root.version)}`);
+  }
+  const nonFinite = findNonFinite(root);
+  if (nonFinite !== undefined) rangeFail(nonFinite, 'must be a finite number, got NaN or Infinity');
+  onlyKeys(root, TOP_KEYS, '');
+
+  const title = readString(root, 'title', '').trim();
+  if (title === '') rangeFail('title', 'must not be empty');
+  const description = readOptionalString(root, 'description', '') ?? '';
+  readOptionalString(root, 'notes', '');
+  const marginK = readOptionalNumber(root, 'marginK', '', { min: 0, unit: 'K' }) ?? DEFAULT_MARGIN_K;
+  const ambient = parseAmbient(root.ambient, 'ambient');
+  const enclosure = root.enclosure === undefined ? undefined : parseEnclosure(root.enclosure, 'enclosure');
+
+  const sinks = asArray(root.sinks, 'sinks', 1).map((item, i) => parseSink(item, fieldPath('sinks', i), enclosure !== undefined));
+  const devices = asArray(root.devices, 'devices', 1).map((item, i) => parseDevice(item, fieldPath('devices', i)));
+  const taken = new Map<string, string>();
+  checkUniqueIds(sinks, 'sinks', taken);
+  checkUniqueIds(devices, 'devices', taken);
+  checkSinkPaths(sinks, enclosure !== undefined);
+  checkDeviceSinks(devices, sinks);
+
+  const profile = parseProfile(root.profile, 'profile', devices);
+  const doc: StudyDocument = { format: STUDY_FORMAT, version: STUDY_VERSION, title, description, marginK, ambient, sinks, devices, profile };
+  if (enclosure) doc.enclosure = enclosure;
+  return doc;
+}
