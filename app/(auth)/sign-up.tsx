@@ -1,0 +1,3 @@
+import { SignUpScreen } from '@/features/auth/sign-up-screen';
+
+export default SignUpScreen;

@@ -1,0 +1,3 @@
+import { AccountScreen } from '@/features/account/account-screen';
+
+export default AccountScreen;

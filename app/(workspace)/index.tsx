@@ -1,0 +1,3 @@
+import { StudiesScreen } from '@/features/studies/studies-screen';
+
+export default StudiesScreen;

@@ -1,0 +1,3 @@
+import { NewStudyScreen } from '@/features/studies/new-study-screen';
+
+export default NewStudyScreen;

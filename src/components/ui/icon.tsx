@@ -1,0 +1,35 @@
+import Svg, { Path } from 'react-native-svg';
+
+import { color as palette } from '@/constants/theme';
+
+/** Line icons drawn for this app on a 24-unit grid. */
+const paths = {
+  studies: 'M6 3h9l4 4v14H6z M15 3v4h4 M9 12h7 M9 16h7',
+  account: 'M12 12a4 4 0 1 0 0-8 4 4 0 0 0 0 8z M4 21c1.2-4 4.3-6 8-6s6.8 2 8 6',
+  signOut: 'M14 4H5v16h9 M10 12h10 M16 8l4 4-4 4',
+  back: 'M15 5l-7 7 7 7',
+  plus: 'M12 5v14 M5 12h14',
+  sortUp: 'M8 14l4-5 4 5z',
+  sortDown: 'M8 10l4 5 4-5z',
+  sortNone: 'M8 10l4-4 4 4z M8 14l4 4 4-4z',
+} as const;
+
+export type IconName = keyof typeof paths;
+
+export type IconProps = { name: IconName; size?: number; color?: string };
+
+export function Icon({ name, size = 22, color = palette.ink }: IconProps) {
+  const filled = name.startsWith('sort');
+  return (
+    <Svg width={size} height={size} viewBox="0 0 24 24" aria-hidden>
+      <Path
+        d={paths[name]}
+        stroke={filled ? 'none' : color}
+        fill={filled ? color : 'none'}
+        strokeWidth={1.8}
+        strokeLinecap="round"
+        strokeLinejoin="round"
+      />
+    </Svg>
+  );
+}

@@ -1,0 +1,52 @@
+import { Link } from 'expo-router';
+import { Pressable, StyleSheet, View } from 'react-native';
+
+import { Text } from '@/components/ui';
+import { color, radius, spacing } from '@/constants/theme';
+
+import { formatDate } from '../format';
+import type { StudySummary } from '../types';
+import { StatusBadge } from './status-badge';
+
+export type StudyCardProps = { study: StudySummary };
+
+export function StudyCard({ study }: StudyCardProps) {
+  return (
+    <Link href={`/studies/${study.id}`} asChild>
+      <Pressable
+        role="link"
+        testID={`study-card-${study.id}`}
+        style={({ pressed }) => [styles.card, pressed && styles.pressed]}
+      >
+        <View style={styles.head}>
+          <StatusBadge status={study.status} />
+          <Text variant="caption" tone="faint">
+            v{study.version}
+          </Text>
+        </View>
+        <Text variant="heading">{study.title}</Text>
+        {study.description ? (
+          <Text tone="muted" numberOfLines={2}>
+            {study.description}
+          </Text>
+        ) : null}
+        <Text variant="caption" tone="faint">
+          {study.author.name} · {study.teamName} · updated {formatDate(study.updatedAt)}
+        </Text>
+      </Pressable>
+    </Link>
+  );
+}
+
+const styles = StyleSheet.create({
+  card: {
+    gap: spacing.sm,
+    padding: spacing.lg,
+    borderRadius: radius.lg,
+    borderWidth: 1,
+    borderColor: color.border,
+    backgroundColor: color.surface,
+  },
+  pressed: { backgroundColor: color.surfaceMuted },
+  head: { flexDirection: 'row', justifyContent: 'space-between', alignItems: 'center' },
+});

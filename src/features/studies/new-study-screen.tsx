@@ -1,0 +1,38 @@
+import { useRouter } from 'expo-router';
+
+import { Card, EmptyState, Page, Text } from '@/components/ui';
+import { useSignedInSession } from '@/features/auth/api';
+import { teamsWhereCanCreate } from '@/features/auth/roles';
+
+import { BackLink } from './components/back-link';
+import { NewStudyForm } from './components/new-study-form';
+
+export function NewStudyScreen() {
+  const router = useRouter();
+  const session = useSignedInSession();
+  const teams = teamsWhereCanCreate(session.memberships);
+
+  return (
+    <Page width="form">
+      <BackLink href="/" label="Studies" />
+      <Text variant="title">New study</Text>
+      {teams.length === 0 ? (
+        <EmptyState
+          title="Reviewers cannot create studies"
+          message="Your role lets you read and review your team's studies. Ask an owner or designer to start one."
+        />
+      ) : (
+        <Card>
+          <Text tone="muted">
+            Start with a title; the pass element, sink and load profile are added to the study later.
+          </Text>
+          <NewStudyForm
+            teams={teams}
+            onCreated={(study) => router.replace(`/studies/${study.id}`)}
+            onCancel={() => router.replace('/')}
+          />
+        </Card>
+      )}
+    </Page>
+  );
+}

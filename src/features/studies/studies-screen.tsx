@@ -1,0 +1,91 @@
+import { useRouter } from 'expo-router';
+import { useMemo, useState } from 'react';
+import { StyleSheet, View } from 'react-native';
+
+import { errorMessage } from '@/api';
+import { Button, EmptyState, ErrorState, LoadingState, Page, Text, useIsWide } from '@/components/ui';
+import { spacing } from '@/constants/theme';
+import { useSignedInSession } from '@/features/auth/api';
+import { teamsWhereCanCreate } from '@/features/auth/roles';
+
+import { useStudies } from './api';
+import { StudyCard } from './components/study-card';
+import { StudyFilters } from './components/study-filters';
+import { StudyTable } from './components/study-table';
+import { DEFAULT_SORT, nextSort, queryStudies, type StatusFilter, type StudySort } from './study-list-query';
+
+export function StudiesScreen() {
+  const router = useRouter();
+  const wide = useIsWide();
+  const session = useSignedInSession();
+  const canCreate = teamsWhereCanCreate(session.memberships).length > 0;
+  const studies = useStudies();
+
+  const [search, setSearch] = useState('');
+  const [status, setStatus] = useState<StatusFilter>('all');
+  const [sort, setSort] = useState<StudySort>(DEFAULT_SORT);
+  const shown = useMemo(
+    () => queryStudies(studies.data ?? [], search, status, sort),
+    [studies.data, search, status, sort],
+  );
+
+  const newStudy = canCreate ? <Button label="New study" onPress={() => router.push('/studies/new')} /> : null;
+
+  return (
+    <Page>
+      <View style={styles.header}>
+        <View style={styles.heading}>
+          <Text variant="title">Studies</Text>
+          <Text tone="muted">
+            {studies.data
+              ? `${studies.data.length} ${studies.data.length === 1 ? 'study' : 'studies'} in your teams`
+              : 'Design questions your teams are working on'}
+          </Text>
+        </View>
+        {newStudy}
+      </View>
+
+      {studies.isPending ? (
+        <LoadingState label="Loading studies…" />
+      ) : studies.isError ? (
+        <ErrorState
+          title="Could not load the studies"
+          message={errorMessage(studies.error)}
+          onRetry={() => studies.refetch()}
+          retrying={studies.isFetching}
+        />
+      ) : studies.data.length === 0 ? (
+        <EmptyState
+          title="No studies yet"
+          message={
+            canCreate
+              ? 'A study holds one design question: the pass element, its sink and the load it must survive.'
+              : 'Studies appear here once a designer in your team creates one.'
+          }
+          action={newStudy}
+        />
+      ) : (
+        <>
+          <StudyFilters search={search} onSearch={setSearch} status={status} onStatus={setStatus} wide={wide} />
+          {shown.length === 0 ? (
+            <EmptyState title="No matching studies" message="Change the search words or the status filter." />
+          ) : wide ? (
+            <StudyTable studies={shown} sort={sort} onSort={(key) => setSort((s) => nextSort(s, key))} />
+          ) : (
+            <View style={styles.cards}>
+              {shown.map((study) => (
+                <StudyCard key={study.id} study={study} />
+              ))}
+            </View>
+          )}
+        </>
+      )}
+    </Page>
+  );
+}
+
+const styles = StyleSheet.create({
+  header: { flexDirection: 'row', flexWrap: 'wrap', justifyContent: 'space-between', alignItems: 'flex-end', gap: spacing.md },
+  heading: { gap: spacing.xxs, flexShrink: 1 },
+  cards: { gap: spacing.md },
+});

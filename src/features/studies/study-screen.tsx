@@ -1,0 +1,69 @@
+import { StyleSheet, View } from 'react-native';
+
+import { errorMessage, errorStatus } from '@/api';
+import { Card, EmptyState, ErrorState, LoadingState, Page, Text, useIsWide } from '@/components/ui';
+import { spacing } from '@/constants/theme';
+
+import { useStudy } from './api';
+import { BackLink } from './components/back-link';
+import { DocumentSummary } from './components/document-summary';
+import { EstimateCaution } from './components/estimate-caution';
+import { StatusBadge } from './components/status-badge';
+import { StudyFacts } from './components/study-facts';
+
+export type StudyScreenProps = { id: string };
+
+/** Read-only view of one study: what it is, who owns it, and what its document holds. */
+export function StudyScreen({ id }: StudyScreenProps) {
+  const wide = useIsWide();
+  const study = useStudy(id);
+
+  let body;
+  if (study.isPending) {
+    body = <LoadingState label="Loading study…" />;
+  } else if (study.isError && errorStatus(study.error) === 404) {
+    body = (
+      <EmptyState
+        title="Study not found"
+        message="It may have been deleted, or it belongs to a team you are not a member of."
+      />
+    );
+  } else if (study.isError) {
+    body = (
+      <ErrorState
+        title="Could not load the study"
+        message={errorMessage(study.error)}
+        onRetry={() => study.refetch()}
+        retrying={study.isFetching}
+      />
+    );
+  } else {
+    const data = study.data;
+    body = (
+      <>
+        <View style={styles.heading}>
+          <StatusBadge status={data.status} />
+          <Text variant={wide ? 'display' : 'title'}>{data.title}</Text>
+        </View>
+        <StudyFacts study={data} wide={wide} />
+        <Card>
+          <Text variant="heading">Description</Text>
+          <Text tone={data.description ? 'default' : 'muted'}>{data.description || 'No description.'}</Text>
+        </Card>
+        <DocumentSummary document={data.document} />
+        <EstimateCaution />
+      </>
+    );
+  }
+
+  return (
+    <Page width="readable">
+      <BackLink href="/" label="Studies" />
+      {body}
+    </Page>
+  );
+}
+
+const styles = StyleSheet.create({
+  heading: { gap: spacing.sm },
+});
