@@ -1,0 +1,46 @@
+import { Slot } from 'expo-router';
+import { renderRouter } from 'expo-router/testing-library';
+
+import { createQueryClient } from '@/api';
+import { AppProviders } from '@/features/shell/app-providers';
+
+import AuthLayout from '../../../app/(auth)/_layout';
+import SignInRoute from '../../../app/(auth)/sign-in';
+import SignUpRoute from '../../../app/(auth)/sign-up';
+import WorkspaceLayout from '../../../app/(workspace)/_layout';
+import AccountRoute from '../../../app/(workspace)/account';
+import StudiesRoute from '../../../app/(workspace)/index';
+import StudyRoute from '../../../app/(workspace)/studies/[id]';
+import NewStudyRoute from '../../../app/(workspace)/studies/new';
+
+/**
+ * Renders the real route tree from a URL. The root layout is replaced only to
+ * skip font loading and to give each test a fresh query cache without retries.
+ */
+export function renderApp(initialUrl: string) {
+  const queryClient = createQueryClient();
+  queryClient.setDefaultOptions({
+    queries: { ...queryClient.getDefaultOptions().queries, retry: false },
+  });
+  function TestRootLayout() {
+    return (
+      <AppProviders queryClient={queryClient}>
+        <Slot />
+      </AppProviders>
+    );
+  }
+  return renderRouter(
+    {
+      _layout: TestRootLayout,
+      '(auth)/_layout': AuthLayout,
+      '(auth)/sign-in': SignInRoute,
+      '(auth)/sign-up': SignUpRoute,
+      '(workspace)/_layout': WorkspaceLayout,
+      '(workspace)/index': StudiesRoute,
+      '(workspace)/account': AccountRoute,
+      '(workspace)/studies/new': NewStudyRoute,
+      '(workspace)/studies/[id]': StudyRoute,
+    },
+    { initialUrl },
+  );
+}
