@@ -13,15 +13,19 @@ describe('migrations', () => {
   });
 
   it('create every table, apply once only, and roll back cleanly', async () => {
-    expect(await migrateUp(db.sequelize)).toEqual(['0001-initial']);
+    expect(await migrateUp(db.sequelize)).toEqual(['0001-initial', '0002-team-work']);
     expect(await migrateUp(db.sequelize)).toEqual([]);
     const tables = (await db.sequelize.getQueryInterface().showAllTables()).sort();
-    expect(tables).toEqual(expect.arrayContaining(['Sessions', 'memberships', 'schema_migrations', 'studies', 'teams', 'users']));
+    expect(tables).toEqual(expect.arrayContaining([
+        'Sessions', 'audit_events', 'comments', 'invitations', 'mail_messages', 'memberships',
+        'password_resets', 'reviews', 'revisions', 'schema_migrations', 'studies', 'teams', 'users',
+      ]));
 
     await createMigrator(db.sequelize).down({ to: 0 });
     const after = await db.sequelize.getQueryInterface().showAllTables();
     expect(after).not.toContain('users');
-    expect(await migrateUp(db.sequelize)).toEqual(['0001-initial']);
+    expect(after).not.toContain('revisions');
+    expect(await migrateUp(db.sequelize)).toEqual(['0001-initial', '0002-team-work']);
   });
 
   it('runs SQLite in WAL mode with a busy timeout', async () => {

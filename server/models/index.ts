@@ -1,24 +1,51 @@
 import type { Sequelize } from 'sequelize';
+import { AuditEvent } from './audit-event';
+import { Comment } from './comment';
+import { Invitation } from './invitation';
+import { MailMessage } from './mail-message';
 import { Membership } from './membership';
+import { PasswordReset } from './password-reset';
+import { Review } from './review';
+import { Revision } from './revision';
 import { Study } from './study';
 import { Team } from './team';
 import { User } from './user';
 
-export type Models = { User: typeof User; Team: typeof Team; Membership: typeof Membership; Study: typeof Study };
+const ALL = { User, Team, Membership, Study, Revision, Review, Comment, Invitation, PasswordReset, MailMessage, AuditEvent };
+export type Models = typeof ALL;
+
+const fk = (name: string, field: string, allowNull = false) => ({ foreignKey: { name, field, allowNull } });
 
 export function initModels(sequelize: Sequelize): Models {
-  for (const model of [User, Team, Membership, Study]) model.initModel(sequelize);
+  for (const model of Object.values(ALL)) model.initModel(sequelize);
 
-  User.hasMany(Membership, { foreignKey: { name: 'userId', field: 'user_id', allowNull: false }, as: 'memberships' });
-  Membership.belongsTo(User, { foreignKey: { name: 'userId', field: 'user_id', allowNull: false }, as: 'user' });
-  Team.hasMany(Membership, { foreignKey: { name: 'teamId', field: 'team_id', allowNull: false }, as: 'memberships' });
-  Membership.belongsTo(Team, { foreignKey: { name: 'teamId', field: 'team_id', allowNull: false }, as: 'team' });
-  Team.hasMany(Study, { foreignKey: { name: 'teamId', field: 'team_id', allowNull: false }, as: 'studies' });
-  Study.belongsTo(Team, { foreignKey: { name: 'teamId', field: 'team_id', allowNull: false }, as: 'team' });
-  Study.belongsTo(User, { foreignKey: { name: 'authorId', field: 'author_id', allowNull: false }, as: 'author' });
+  User.hasMany(Membership, { ...fk('userId', 'user_id'), as: 'memberships' });
+  Membership.belongsTo(User, { ...fk('userId', 'user_id'), as: 'user' });
+  Team.hasMany(Membership, { ...fk('teamId', 'team_id'), as: 'memberships' });
+  Membership.belongsTo(Team, { ...fk('teamId', 'team_id'), as: 'team' });
 
-  return { User, Team, Membership, Study };
+  Team.hasMany(Study, { ...fk('teamId', 'team_id'), as: 'studies' });
+  Study.belongsTo(Team, { ...fk('teamId', 'team_id'), as: 'team' });
+  Study.belongsTo(User, { ...fk('authorId', 'author_id'), as: 'author' });
+
+  Study.hasMany(Revision, { ...fk('studyId', 'study_id'), as: 'revisions' });
+  Revision.belongsTo(User, { ...fk('authorId', 'author_id', true), as: 'author' });
+  Study.hasMany(Review, { ...fk('studyId', 'study_id'), as: 'reviews' });
+  Review.belongsTo(User, { ...fk('reviewerId', 'reviewer_id', true), as: 'reviewer' });
+  Study.hasMany(Comment, { ...fk('studyId', 'study_id'), as: 'comments' });
+  Comment.belongsTo(User, { ...fk('authorId', 'author_id', true), as: 'author' });
+
+  Team.hasMany(Invitation, { ...fk('teamId', 'team_id'), as: 'invitations' });
+  Invitation.belongsTo(Team, { ...fk('teamId', 'team_id'), as: 'team' });
+  Invitation.belongsTo(User, { ...fk('invitedById', 'invited_by_id', true), as: 'invitedBy' });
+  PasswordReset.belongsTo(User, { ...fk('userId', 'user_id'), as: 'user' });
+  Team.hasMany(AuditEvent, { ...fk('teamId', 'team_id'), as: 'auditEvents' });
+  AuditEvent.belongsTo(User, { ...fk('actorId', 'actor_id', true), as: 'actor' });
+
+  return ALL;
 }
 
-export { Membership, Study, Team, User };
+export { AuditEvent, Comment, Invitation, MailMessage, Membership, PasswordReset, Review, Revision, Study, Team, User };
 export type { Role } from './membership';
+export type { CommentAnchor } from './comment';
+export type { ReviewDecision } from './review';
