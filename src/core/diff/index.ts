@@ -1,0 +1,2 @@
+export { diffDocuments, describeChanges } from './diff-documents';
+export type { FieldChange } from './diff-documents';
