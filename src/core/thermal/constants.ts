@@ -15,7 +15,10 @@ export const RATE_MERGE_REL_TOL = 1e-12;
  */
 export const PEAK_SEARCH_ABS_TOL = 1e-12;
 
-/** Above this λmax/λmin the eigen decomposition cannot resolve the slowest mode. */
+/**
+ * Largest λmax/λmin accepted. The graded ordering in compileNetwork keeps ladders exact far
+ * beyond it; the limit guards general networks, whose slowest mode may lose ~eps·λmax/λmin.
+ */
 export const STIFFNESS_LIMIT = 1e13;
 
 /** Foster terms whose τ differ by less than this (relative) are merged. */

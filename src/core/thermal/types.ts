@@ -1,3 +1,5 @@
+import type { ExpSumWorkspace } from './exp-sum-roots';
+
 /**
  * Shapes shared by the thermal core. Units are SI (s, W, J/K, K/W); temperatures in °C.
  * Arrays of numbers that the solver reads or writes per segment are Float64Array.
@@ -69,6 +71,7 @@ export type ModalModel = {
     readonly x: Float64Array;
     readonly xInf: Float64Array;
     readonly decay: Float64Array;
+    readonly sum: ExpSumWorkspace;
   };
 };
 

@@ -1,14 +1,41 @@
+import { checkIndex, checkNumber } from './check-input';
 import type { FosterTerm, ModalModel } from './types';
 
-/** Step response, K/W: rise of node nodeIndex t seconds after a unit step of power input inputIndex. */
+/**
+ * Thermal impedance Zth(t), K/W: rise of node nodeIndex above ambient t seconds after a
+ * unit step of power input inputIndex, from equilibrium. Zth(∞) is the steady transfer
+ * resistance; Zth(0) is non-zero only for massless nodes fed without capacity in between.
+ */
 export function zth(model: ModalModel, inputIndex: number, nodeIndex: number, t: number): number {
-  throw new Error('not implemented yet');
+  checkIndex(inputIndex, 'inputIndex', model.powerInputCount);
+  checkIndex(nodeIndex, 'nodeIndex', model.nodeCount);
+  checkNumber(t, 't', 0);
+  const { modeCount: n, inputCount: q, rates, outputFromModes: W, modesFromInputs: F } = model;
+  let v = model.steadyFromInputs[nodeIndex * q + inputIndex];
+  for (let k = 0; k < n; k++) v -= W[nodeIndex * n + k] * F[k * q + inputIndex] * Math.exp(-rates[k] * t);
+  return v;
 }
 
 /**
- * The same response as a Foster-like sum: Zth(t) = instantKPerW + Σ r (1 − e^(−t/τ)).
- * Terms of a transfer (not driving-point) response may have negative r.
+ * The same response as a Foster-like sum, ascending τ:
+ * Zth(t) = instantKPerW + Σ rKPerW (1 − e^(−t/tauS)). For a transfer (not driving-point)
+ * response some rKPerW may be negative.
  */
-export function zthTerms(model: ModalModel, inputIndex: number, nodeIndex: number): { instantKPerW: number; terms: FosterTerm[] } {
-  throw new Error('not implemented yet');
+export function zthTerms(
+  model: ModalModel,
+  inputIndex: number,
+  nodeIndex: number,
+): { instantKPerW: number; terms: FosterTerm[] } {
+  checkIndex(inputIndex, 'inputIndex', model.powerInputCount);
+  checkIndex(nodeIndex, 'nodeIndex', model.nodeCount);
+  const { modeCount: n, inputCount: q, rates, outputFromModes: W, modesFromInputs: F } = model;
+  const terms: FosterTerm[] = [];
+  let sum = 0;
+  for (let k = 0; k < n; k++) {
+    const r = W[nodeIndex * n + k] * F[k * q + inputIndex];
+    sum += r;
+    terms.push({ rKPerW: r, tauS: 1 / rates[k] });
+  }
+  terms.reverse();
+  return { instantKPerW: model.steadyFromInputs[nodeIndex * q + inputIndex] - sum, terms };
 }
