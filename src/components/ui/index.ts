@@ -17,6 +17,8 @@ export { LoadingState } from './loading-state';
 export type { LoadingStateProps } from './loading-state';
 export { Page } from './page';
 export type { PageProps } from './page';
+export { PressableLink } from './pressable-link';
+export type { PressableLinkProps } from './pressable-link';
 export { Text } from './text';
 export type { TextProps, TextTone, TextVariant } from './text';
 export { TextField } from './text-field';

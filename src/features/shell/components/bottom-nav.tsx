@@ -1,8 +1,8 @@
-import { Link, usePathname } from 'expo-router';
-import { Pressable, StyleSheet, Text, View } from 'react-native';
+import { usePathname } from 'expo-router';
+import { StyleSheet, Text, View } from 'react-native';
 import { useSafeAreaInsets } from 'react-native-safe-area-context';
 
-import { Icon } from '@/components/ui';
+import { Icon, PressableLink } from '@/components/ui';
 import { color, fontFamily, fontSize, size, spacing } from '@/constants/theme';
 
 import { NAV_ITEMS } from '../nav-items';
@@ -17,16 +17,16 @@ export function BottomNav() {
         const active = item.matches(pathname);
         const tint = active ? color.accent : color.inkFaint;
         return (
-          <Link key={item.href} href={item.href} asChild>
-            <Pressable
-              role="link"
-              aria-current={active ? 'page' : undefined}
-              style={({ pressed }) => [styles.item, pressed && styles.pressed]}
-            >
-              <Icon name={item.icon} size={22} color={tint} />
-              <Text style={[styles.label, { color: tint }]}>{item.label}</Text>
-            </Pressable>
-          </Link>
+          <PressableLink
+            key={item.href}
+            href={item.href}
+            aria-current={active ? 'page' : undefined}
+            style={styles.item}
+            activeStyle={styles.pressed}
+          >
+            <Icon name={item.icon} size={22} color={tint} />
+            <Text style={[styles.label, { color: tint }]}>{item.label}</Text>
+          </PressableLink>
         );
       })}
     </View>

@@ -1,8 +1,8 @@
-import { Link, usePathname } from 'expo-router';
+import { usePathname } from 'expo-router';
 import { Pressable, StyleSheet, Text as NativeText, View } from 'react-native';
 import { useSafeAreaInsets } from 'react-native-safe-area-context';
 
-import { BrandMark, Icon } from '@/components/ui';
+import { BrandMark, Icon, PressableLink } from '@/components/ui';
 import { color, fontFamily, fontSize, radius, size, spacing } from '@/constants/theme';
 import { ROLE_LABELS } from '@/features/auth/roles';
 import type { Session } from '@/features/auth/types';
@@ -26,16 +26,16 @@ export function Sidebar({ session, onSignOut, signingOut }: SidebarProps) {
         {NAV_ITEMS.map((item) => {
           const active = item.matches(pathname);
           return (
-            <Link key={item.href} href={item.href} asChild>
-              <Pressable
-                role="link"
-                aria-current={active ? 'page' : undefined}
-                style={({ pressed }) => [styles.item, (active || pressed) && styles.itemActive]}
-              >
-                <Icon name={item.icon} size={20} color={active ? color.onAccent : color.sidebarMuted} />
-                <NativeText style={[styles.itemLabel, active && styles.itemLabelActive]}>{item.label}</NativeText>
-              </Pressable>
-            </Link>
+            <PressableLink
+              key={item.href}
+              href={item.href}
+              aria-current={active ? 'page' : undefined}
+              style={[styles.item, active && styles.itemActive]}
+              activeStyle={styles.itemActive}
+            >
+              <Icon name={item.icon} size={20} color={active ? color.onAccent : color.sidebarMuted} />
+              <NativeText style={[styles.itemLabel, active && styles.itemLabelActive]}>{item.label}</NativeText>
+            </PressableLink>
           );
         })}
       </View>

@@ -1,7 +1,6 @@
-import { Link } from 'expo-router';
-import { Pressable, StyleSheet, View } from 'react-native';
+import { StyleSheet, View } from 'react-native';
 
-import { Text } from '@/components/ui';
+import { PressableLink, Text } from '@/components/ui';
 import { color, radius, spacing } from '@/constants/theme';
 
 import { formatDate } from '../format';
@@ -12,29 +11,28 @@ export type StudyCardProps = { study: StudySummary };
 
 export function StudyCard({ study }: StudyCardProps) {
   return (
-    <Link href={`/studies/${study.id}`} asChild>
-      <Pressable
-        role="link"
-        testID={`study-card-${study.id}`}
-        style={({ pressed }) => [styles.card, pressed && styles.pressed]}
-      >
-        <View style={styles.head}>
-          <StatusBadge status={study.status} />
-          <Text variant="caption" tone="faint">
-            v{study.version}
-          </Text>
-        </View>
-        <Text variant="heading">{study.title}</Text>
-        {study.description ? (
-          <Text tone="muted" numberOfLines={2}>
-            {study.description}
-          </Text>
-        ) : null}
+    <PressableLink
+      href={`/studies/${study.id}`}
+      testID={`study-card-${study.id}`}
+      style={styles.card}
+      activeStyle={styles.active}
+    >
+      <View style={styles.head}>
+        <StatusBadge status={study.status} />
         <Text variant="caption" tone="faint">
-          {study.author.name} · {study.teamName} · updated {formatDate(study.updatedAt)}
+          v{study.version}
         </Text>
-      </Pressable>
-    </Link>
+      </View>
+      <Text variant="heading">{study.title}</Text>
+      {study.description ? (
+        <Text tone="muted" numberOfLines={2}>
+          {study.description}
+        </Text>
+      ) : null}
+      <Text variant="caption" tone="faint">
+        {study.author.name} · {study.teamName} · updated {formatDate(study.updatedAt)}
+      </Text>
+    </PressableLink>
   );
 }
 
@@ -47,6 +45,6 @@ const styles = StyleSheet.create({
     borderColor: color.border,
     backgroundColor: color.surface,
   },
-  pressed: { backgroundColor: color.surfaceMuted },
+  active: { borderColor: color.borderStrong, backgroundColor: color.surfaceMuted },
   head: { flexDirection: 'row', justifyContent: 'space-between', alignItems: 'center' },
 });

@@ -1,4 +1,4 @@
-import { ScrollView, StyleSheet, View } from 'react-native';
+import { StyleSheet, View } from 'react-native';
 
 import { Chip, TextField } from '@/components/ui';
 import { spacing } from '@/constants/theme';
@@ -34,18 +34,16 @@ export function StudyFilters({ search, onSearch, status, onStatus, wide }: Study
           inputMode="search"
         />
       </View>
-      <ScrollView horizontal showsHorizontalScrollIndicator={false} contentContainerStyle={styles.chips}>
-        <View role="radiogroup" aria-label="Filter by status" style={styles.chips}>
-          {OPTIONS.map((option) => (
-            <Chip
-              key={option.value}
-              label={option.label}
-              selected={status === option.value}
-              onPress={() => onStatus(option.value)}
-            />
-          ))}
-        </View>
-      </ScrollView>
+      <View role="radiogroup" aria-label="Filter by status" style={styles.chips}>
+        {OPTIONS.map((option) => (
+          <Chip
+            key={option.value}
+            label={option.label}
+            selected={status === option.value}
+            onPress={() => onStatus(option.value)}
+          />
+        ))}
+      </View>
     </View>
   );
 }
@@ -54,5 +52,5 @@ const styles = StyleSheet.create({
   bar: { gap: spacing.md },
   barWide: { flexDirection: 'row', alignItems: 'flex-end', gap: spacing.xl },
   searchWide: { width: 320 },
-  chips: { flexDirection: 'row', gap: spacing.sm, alignItems: 'center' },
+  chips: { flexDirection: 'row', flexWrap: 'wrap', gap: spacing.sm, alignItems: 'center' },
 });

@@ -53,7 +53,7 @@ export function StudyTable({ studies, sort, onSort }: StudyTableProps) {
             <Text>{study.author.name}</Text>
           </View>
           <View role="cell" style={[styles.cell, { flex: FLEX.updated }]}>
-            <Text variant="mono" tone="muted">
+            <Text tone="muted">
               {formatDate(study.updatedAt)}
             </Text>
           </View>
