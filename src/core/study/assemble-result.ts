@@ -1,0 +1,104 @@
+import type { StudyModel } from './study-model';
+import type { Observer } from './observer';
+import type { EventLog } from './event-log';
+import type { PassesRun } from './run-passes';
+import type { DeviceResult, SinkResult, StudyResult } from './result-types';
+import { MAX_LISTED_EVENTS } from './constants';
+
+export type AssembleInput = {
+  sm: StudyModel;
+  observer: Observer;
+  events: EventLog;
+  run: PassesRun;
+  method: StudyResult['solver']['method'];
+  stretches: number;
+  periodic?: StudyResult['solver']['periodic'];
+  warnings: string[];
+  rsaRange?: [number, number][];
+};
+
+function assertFinite(value: unknown, path: string): void {
+  if (typeof value === 'number' && !Number.isFinite(value)) {
+    throw new RangeError(`${path}: the solution is not a finite number; check the study's values for extremes`);
+  }
+  if (Array.isArray(value)) value.forEach((v, i) => assertFinite(v, `${path}[${i}]`));
+  else if (value && typeof value === 'object' && !ArrayBuffer.isView(value)) {
+    for (const [k, v] of Object.entries(value)) assertFinite(v, `${path}.${k}`);
+  }
+}
+
+/** Turns what the observer gathered into the study result; never lets a NaN through. */
+export function assembleResult(input: AssembleInput): StudyResult {
+  const { sm, observer: obs, events, run } = input;
+  const { doc } = sm;
+  const duration = run.endS;
+  const devices: Record<string, DeviceResult> = {};
+  doc.devices.forEach((d, i) => {
+    const targetC = obs.targetC[i];
+    const peak = obs.peakC[2 * i];
+    const result: DeviceResult = {
+      id: d.id,
+      count: d.count,
+      sink: d.sink,
+      peakJunctionC: peak,
+      peakTimeS: obs.peakTimeS[2 * i],
+      peakCaseC: obs.peakC[2 * i + 1],
+      peakCaseTimeS: obs.peakTimeS[2 * i + 1],
+      tjMaxC: d.tjMaxC,
+      targetC,
+      marginToMaxK: d.tjMaxC - peak,
+      marginToTargetK: targetC - peak,
+      timeAboveTargetS: Math.min(duration, obs.timeAboveS[i]),
+      peakPowerW: obs.peakPartPowerW[i],
+      averagePowerW: duration > 0 ? obs.partEnergyJ[i] / duration : 0,
+      energyJ: obs.partEnergyJ[i],
+      shutdowns: events.trips.get(d.id) ?? 0,
+    };
+    if (d.name !== undefined) result.name = d.name;
+    devices[d.id] = result;
+  });
+  const eventTotal = Object.values(events.counts).reduce((a, b) => a + b, 0);
+  if (eventTotal > events.listed.length) {
+    input.warnings.push(`${eventTotal} events: the list holds the first ${MAX_LISTED_EVENTS}; eventCounts counts them all.`);
+  }
+  const firstSink = 2 * doc.devices.length;
+  const sinks: Record<string, SinkResult> = {};
+  doc.sinks.forEach((s, i) => {
+    const result: SinkResult = { id: s.id, peakC: obs.peakC[firstSink + i], peakTimeS: obs.peakTimeS[firstSink + i], rthKPerW: s.rthKPerW };
+    if (s.name !== undefined) result.name = s.name;
+    const range = input.rsaRange?.[i];
+    if (s.naturalConvection && range && Number.isFinite(range[0])) result.rthRangeKPerW = range;
+    sinks[s.id] = result;
+  });
+  const worstDevice = Object.values(devices).reduce((a, b) => (b.marginToTargetK < a.marginToTargetK ? b : a));
+  const result: StudyResult = {
+    title: doc.title,
+    durationS: duration,
+    marginK: doc.marginK,
+    ambient: { minC: run.ambientMinC, maxC: run.ambientMaxC },
+    devices,
+    sinks,
+    worst: { device: worstDevice.id, peakJunctionC: worstDevice.peakJunctionC, marginToTargetK: worstDevice.marginToTargetK, timeS: worstDevice.peakTimeS },
+    meetsTarget: Object.values(devices).every((d) => d.marginToTargetK > 0),
+    events: events.listed,
+    eventCounts: { ...events.counts },
+    solver: {
+      method: input.method,
+      stretches: input.stretches,
+      compiledModels: sm.compiledCount(),
+      convectionTolerance: sm.tolerance,
+    },
+    warnings: input.warnings,
+  };
+  if (sm.enclosure >= 0) {
+    const w = obs.nodes.length - 1;
+    result.enclosure = { peakC: obs.peakC[w], peakTimeS: obs.peakTimeS[w] };
+  }
+  if (input.periodic) result.solver.periodic = input.periodic;
+  assertFinite(result, 'result');
+  if (obs.series) result.series = obs.series.build();
+  if (obs.rows) {
+    result.table = { ...obs.rows.table(), peakRows: obs.peakRows.filter((r): r is Float64Array => r !== null) };
+  }
+  return result;
+}

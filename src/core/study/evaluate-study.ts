@@ -1,0 +1,83 @@
+import type { StudyDocument } from './types';
+import type { StudyResult } from './result-types';
+import { createStudyModel } from './study-model';
+import { ambientIntervals } from './ambient-intervals';
+import { passDurationS } from './timeline';
+import { createObserver } from './observer';
+import { createEventLog } from './event-log';
+import { bucketsForPoints } from './series-recorder';
+import { makeRunner, runPasses } from './run-passes';
+import { periodicStartState } from './periodic-start-state';
+import { maxDifference } from './periodic';
+import { assembleResult } from './assemble-result';
+import { CONVECTION_TOLERANCE, DEFAULT_SERIES_POINTS } from './constants';
+
+export type EvaluateOptions = {
+  /** Points per chart series (≥ 4); 0 leaves series out. Default DEFAULT_SERIES_POINTS (2,000). */
+  seriesPoints?: number;
+  /** Keep up to this many rows of node temperatures at solved boundaries (for CSV). Default 0. */
+  boundaryRows?: number;
+  /** Natural-convection re-linearisation tolerance on Rθsa (fraction). Default CONVECTION_TOLERANCE (1 %). */
+  convectionTolerance?: number;
+  /** Use the event-driven path even for a linear study (cross-checks). */
+  forceEventDriven?: boolean;
+};
+
+/**
+ * Solves a study: builds its network (Foster packages as Cauer ladders), turns the profile
+ * into constant-input pieces and solves them exactly: the batch path when the study is
+ * linear, the event-driven path when a device has thermal shutdown or a sink natural
+ * convection. Starts from every node at the first ambient or, with `periodic`, from the
+ * periodic steady state.
+ */
+export function evaluateStudy(doc: StudyDocument, options: EvaluateOptions = {}): StudyResult {
+  const tolerance = options.convectionTolerance ?? CONVECTION_TOLERANCE;
+  if (!(tolerance > 0 && tolerance <= 0.5)) throw new RangeError(`convectionTolerance: must be above 0 and at most 0.5, got ${tolerance}`);
+  const seriesPoints = options.seriesPoints ?? DEFAULT_SERIES_POINTS;
+  if (seriesPoints !== 0 && !(Number.isInteger(seriesPoints) && seriesPoints >= 4)) {
+    throw new RangeError(`seriesPoints: must be 0 or a whole number of at least 4, got ${seriesPoints}`);
+  }
+  const boundaryRows = options.boundaryRows ?? 0;
+  if (!(Number.isInteger(boundaryRows) && boundaryRows >= 0)) throw new RangeError(`boundaryRows: must be a whole number ≥ 0, got ${boundaryRows}`);
+
+  const sm = createStudyModel(doc, tolerance);
+  const hasShutdown = doc.devices.some((d) => d.electrical?.thermalShutdown);
+  const batch = !hasShutdown && sm.nonLinearSinks.length === 0 && !options.forceEventDriven;
+  const ambient = ambientIntervals(doc.ambient);
+  const total = passDurationS(doc) * doc.profile.repeat;
+  const bucketCount = seriesPoints > 0 ? bucketsForPoints(seriesPoints) : 1;
+  const bucketS = total / bucketCount;
+  const warnings: string[] = [];
+
+  let T0: Float64Array = new Float64Array(sm.reference.nodeCount).fill(ambient.valueC[0]);
+  let on0 = doc.devices.map(() => true);
+  let periodic: StudyResult['solver']['periodic'];
+  if (doc.profile.periodic) {
+    const start = periodicStartState(sm, batch, ambient, T0);
+    T0 = start.T;
+    on0 = start.on;
+    periodic = { iterations: start.iterations, residualK: start.residualK, converged: start.converged };
+    if (!start.converged) {
+      warnings.push(`The profile did not settle to a periodic state within ${start.iterations} periods (last change ${start.residualK.toPrecision(3)} K); the results are for the period after that.`);
+    }
+  }
+
+  const observer = createObserver(sm, { bucketS, bucketCount, series: seriesPoints > 0, maxRows: boundaryRows });
+  const events = createEventLog();
+  const runner = makeRunner(sm, batch, observer, events);
+  runner.reset(T0, on0);
+  const run = runPasses(doc, runner, ambient, doc.profile.repeat, bucketS, bucketCount);
+  if (periodic && batch) periodic.residualK = maxDifference(runner.T, T0);
+
+  return assembleResult({
+    sm,
+    observer,
+    events,
+    run,
+    method: batch ? 'batch' : 'event-driven',
+    stretches: runner.stretches(),
+    periodic,
+    warnings,
+    rsaRange: runner.rsaRange(),
+  });
+}

@@ -1,0 +1,164 @@
+import { advance, firstCrossing, peakInSegment, type ModalModel } from '../thermal';
+import type { StudyModel } from './study-model';
+import { createSeriesRecorder, type SeriesRecorder } from './series-recorder';
+import { createBoundaryWriter, type BoundaryWriter } from './boundary-table';
+
+/** Chart and CSV names of the watched nodes, in watch order: junctions, cases, sinks, enclosure. */
+export function watchedNodes(sm: StudyModel): { keys: string[]; nodes: number[] } {
+  const keys: string[] = [];
+  const nodes: number[] = [];
+  sm.doc.devices.forEach((d, i) => {
+    keys.push(`${d.id}.junction`, `${d.id}.case`);
+    nodes.push(sm.junction[i], sm.case[i]);
+  });
+  sm.doc.sinks.forEach((s, i) => {
+    keys.push(`${s.id}.sink`);
+    nodes.push(sm.sink[i]);
+  });
+  if (sm.enclosure >= 0) {
+    keys.push('enclosure.air');
+    nodes.push(sm.enclosure);
+  }
+  return { keys, nodes };
+}
+
+export type ObserverOptions = { bucketS: number; bucketCount: number; series: boolean; maxRows: number };
+
+/**
+ * Everything a run reports, gathered as it goes: exact peaks of the watched nodes, time of
+ * each junction above its target, power per part, chart series and (optionally) CSV rows.
+ */
+export type Observer = {
+  keys: string[];
+  nodes: number[];
+  peakC: Float64Array;
+  peakTimeS: Float64Array;
+  /** Row (time, watched nodes, ambient) at each peak, when rows are kept. */
+  peakRows: (Float64Array | null)[];
+  timeAboveS: Float64Array;
+  targetC: Float64Array;
+  peakPartPowerW: Float64Array;
+  partEnergyJ: Float64Array;
+  series: SeriesRecorder | null;
+  rows: BoundaryWriter | null;
+};
+
+export function createObserver(sm: StudyModel, options: ObserverOptions): Observer {
+  const { keys, nodes } = watchedNodes(sm);
+  const deviceCount = sm.doc.devices.length;
+  return {
+    keys,
+    nodes,
+    peakC: new Float64Array(nodes.length).fill(-Infinity),
+    peakTimeS: new Float64Array(nodes.length),
+    peakRows: nodes.map(() => null),
+    timeAboveS: new Float64Array(deviceCount),
+    targetC: Float64Array.from(sm.doc.devices, (d) => d.tjMaxC - sm.doc.marginK),
+    peakPartPowerW: new Float64Array(deviceCount),
+    partEnergyJ: new Float64Array(deviceCount),
+    series: options.series ? createSeriesRecorder([...keys, 'ambient'], options.bucketS, options.bucketCount) : null,
+    rows: options.maxRows > 0 ? createBoundaryWriter([...keys, 'ambient'], options.maxRows) : null,
+  };
+}
+
+/** Records the state T (all nodes) at time t: a chart sample and a CSV row. */
+export function sampleState(obs: Observer, t: number, T: ArrayLike<number>, ambientC: number): void {
+  const { nodes } = obs;
+  if (obs.series) {
+    for (let w = 0; w < nodes.length; w++) obs.series.add(w, t, T[nodes[w]]);
+    obs.series.add(nodes.length, t, ambientC);
+  }
+  recordRow(obs, t, T, ambientC);
+}
+
+/** A CSV row only. */
+export function recordRow(obs: Observer, t: number, T: ArrayLike<number>, ambientC: number): void {
+  const { nodes } = obs;
+  obs.rows?.push(t, (row, at) => {
+    for (let w = 0; w < nodes.length; w++) row[at + w] = T[nodes[w]];
+    row[at + nodes.length] = ambientC;
+  });
+}
+
+/** Offers a candidate peak of watched node w; `stateAt` gives all node temperatures then (only called for CSV rows). */
+export function offerPeak(obs: Observer, w: number, t: number, valueC: number, ambientC: number, stateAt: () => ArrayLike<number>): void {
+  if (!(valueC > obs.peakC[w])) return;
+  obs.peakC[w] = valueC;
+  obs.peakTimeS[w] = t;
+  if (obs.rows) {
+    const T = stateAt();
+    const row = new Float64Array(obs.nodes.length + 2);
+    row[0] = t;
+    obs.nodes.forEach((node, k) => (row[1 + k] = T[node]));
+    row[obs.nodes.length + 1] = ambientC;
+    obs.peakRows[w] = row;
+  }
+}
+
+export function notePower(obs: Observer, partPowerW: ArrayLike<number>, h: number): void {
+  for (let d = 0; d < partPowerW.length; d++) {
+    if (h > 0 && partPowerW[d] > obs.peakPartPowerW[d]) obs.peakPartPowerW[d] = partPowerW[d];
+    obs.partEnergyJ[d] += partPowerW[d] * h;
+  }
+}
+
+/**
+ * Seconds node spends at or above levelC during a constant-input stretch, from its level
+ * crossings. After each crossing the search restarts a hair later (CROSSING_NUDGE of the
+ * stretch) so a start sitting on the level cannot be found again; an exponential sum of n
+ * modes crosses a level at most n times, which bounds the loop.
+ */
+const CROSSING_NUDGE = 1e-12;
+
+export function timeAtOrAbove(model: ModalModel, T: Float64Array, u: ArrayLike<number>, h: number, node: number, levelC: number, scratch: Float64Array): number {
+  scratch.set(T);
+  let above = scratch[node] >= levelC;
+  let t = 0;
+  let total = 0;
+  const nudge = CROSSING_NUDGE * h;
+  for (let k = 0; k <= model.modeCount + 2 && t < h; k++) {
+    const tc = firstCrossing(model, scratch, u, h - t, node, levelC, above ? 'down' : 'up');
+    if (tc === null) {
+      if (above) total += h - t;
+      return total;
+    }
+    const step = Math.min(h - t, tc + nudge);
+    if (above) total += step;
+    advance(model, scratch, u, step, scratch);
+    t += step;
+    above = !above;
+  }
+  if (above) total += h - t;
+  return total;
+}
+
+/**
+ * Observes one constant-input stretch [t, t + h] from state T: sample at its start, exact
+ * peaks of every watched node (interior ones included), time above target, power.
+ */
+export function observeStretch(
+  obs: Observer,
+  sm: StudyModel,
+  model: ModalModel,
+  T: Float64Array,
+  u: Float64Array,
+  partPowerW: ArrayLike<number>,
+  t: number,
+  h: number,
+  ambientC: number,
+  scratch: Float64Array,
+): void {
+  sampleState(obs, t, T, ambientC);
+  notePower(obs, partPowerW, h);
+  if (h === 0) return;
+  const { nodes } = obs;
+  for (let w = 0; w < nodes.length; w++) {
+    const pk = peakInSegment(model, T, u, h, nodes[w]);
+    offerPeak(obs, w, t + pk.timeS, pk.valueC, ambientC, () => advance(model, T, u, pk.timeS, scratch));
+    if (obs.series && pk.timeS > 0 && pk.timeS < h) obs.series.add(w, t + pk.timeS, pk.valueC);
+    if (w % 2 === 0 && w / 2 < sm.doc.devices.length) {
+      const d = w / 2;
+      if (pk.valueC >= obs.targetC[d]) obs.timeAboveS[d] += timeAtOrAbove(model, T, u, h, nodes[w], obs.targetC[d], scratch);
+    }
+  }
+}

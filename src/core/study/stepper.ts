@@ -1,0 +1,137 @@
+import { advance, firstCrossing, type ModalModel } from '../thermal';
+import { shutdownWatch } from '../electrical';
+import type { StudyModel } from './study-model';
+import type { EventLog } from './event-log';
+import { observeStretch, sampleState, type Observer } from './observer';
+import { fedDevices, segmentPower, type SegmentPower } from './segment-power';
+import { logDriveEvents } from './drive-events';
+import { MAX_SOLVED_PIECES } from './constants';
+
+/** Smallest stretch the convection check may cut a piece to, as a fraction of the piece. */
+const MIN_SPLIT_FRACTION = 1e-9;
+
+/**
+ * Event-driven solver of a study: steps its pieces one constant-input stretch at a time,
+ * ending a stretch where a device trips or resumes (thermal shutdown, found exactly with
+ * firstCrossing) and splitting it where a natural-convection sink's rise moves Rθsa by more
+ * than the tolerance (checked at the middle and the end of each stretch).
+ */
+export type Stepper = {
+  T: Float64Array;
+  on: boolean[];
+  /** Constant-input stretches solved so far. */
+  stretches: number;
+  runPiece(t0: number, h: number, segmentIndex: number, ambientC: number): void;
+  /** Final sample at time t. */
+  finish(t: number, ambientC: number): void;
+  reset(T: ArrayLike<number>, on: readonly boolean[]): void;
+  /** Lowest and highest Rθsa used per sink, K/W. */
+  rsaRange(): [number, number][];
+};
+
+export function createStepper(sm: StudyModel, observer: Observer | null, events: EventLog | null): Stepper {
+  const { doc } = sm;
+  const m = doc.devices.length;
+  const N = sm.reference.nodeCount;
+  const T = new Float64Array(N);
+  const trial = new Float64Array(N);
+  const mid = new Float64Array(N);
+  const scratch = new Float64Array(N);
+  const u = new Float64Array(m + 1);
+  const rsaUsed = new Float64Array(doc.sinks.length);
+  const on = doc.devices.map(() => true);
+  const shutdown = doc.devices.flatMap((d, i) => (d.electrical?.thermalShutdown ? [i] : []));
+  const fedCache = new Map<number, number[]>();
+  let power: SegmentPower | null = null;
+  let powerSegment = -1;
+  let powerKey = '';
+  let suggested = Infinity;
+
+  const rsaLow = new Float64Array(doc.sinks.length).fill(Infinity);
+  const rsaHigh = new Float64Array(doc.sinks.length).fill(-Infinity);
+  const rsaRange = () => doc.sinks.map((_, i): [number, number] => [rsaLow[i], rsaHigh[i]]);
+  const self: Stepper = { T, on, stretches: 0, runPiece, finish, reset, rsaRange };
+
+  function reset(T0: ArrayLike<number>, on0: readonly boolean[]): void {
+    T.set(T0);
+    on0.forEach((v, i) => (on[i] = v));
+    powerSegment = -1;
+    suggested = Infinity;
+  }
+
+  function updatePower(segmentIndex: number): SegmentPower {
+    const key = on.map((v) => (v ? '1' : '0')).join('');
+    if (power && powerSegment === segmentIndex && powerKey === key) return power;
+    const segment = doc.profile.segments[segmentIndex];
+    let fed = fedCache.get(segmentIndex);
+    if (!fed) fedCache.set(segmentIndex, (fed = fedDevices(doc, segment)));
+    power = segmentPower(doc, segment, fed, on);
+    powerSegment = segmentIndex;
+    powerKey = key;
+    for (let d = 0; d < m; d++) u[d] = power.partPowerW[d] * doc.devices[d].count;
+    return power;
+  }
+
+  /** Longest stretch from T (at most h) over which Rθsa stays within tolerance. */
+  function convectionStep(model: ModalModel, h: number, ambientC: number): number {
+    if (sm.nonLinearSinks.length === 0) return h;
+    let step = Math.min(h, suggested);
+    const floor = h * MIN_SPLIT_FRACTION;
+    while (step > floor) {
+      advance(model, T, u, step, trial);
+      advance(model, T, u, step / 2, mid);
+      if (sm.rsaMismatch(trial, ambientC, rsaUsed) <= sm.tolerance && sm.rsaMismatch(mid, ambientC, rsaUsed) <= sm.tolerance) break;
+      step /= 2;
+    }
+    suggested = step < h ? step * 2 : Infinity;
+    return Math.max(step, floor);
+  }
+
+  function runPiece(t0: number, h: number, segmentIndex: number, ambientC: number): void {
+    u[m] = ambientC;
+    const end = t0 + h;
+    let t = t0;
+    for (;;) {
+      const p = updatePower(segmentIndex);
+      const model = sm.modelAt(T, ambientC, rsaUsed);
+      for (let i = 0; i < rsaUsed.length; i++) {
+        if (rsaUsed[i] < rsaLow[i]) rsaLow[i] = rsaUsed[i];
+        if (rsaUsed[i] > rsaHigh[i]) rsaHigh[i] = rsaUsed[i];
+      }
+      let step = convectionStep(model, end - t, ambientC);
+      let tripped: number[] = [];
+      for (const d of shutdown) {
+        const watch = shutdownWatch(doc.devices[d].electrical!.thermalShutdown!, on[d]);
+        const tc = firstCrossing(model, T, u, step, sm.junction[d], watch.levelC, watch.direction);
+        if (tc === null) continue;
+        if (tc < step) {
+          step = tc;
+          tripped = [d];
+        } else if (tc === step) tripped.push(d);
+      }
+      if (++self.stretches > MAX_SOLVED_PIECES) {
+        throw new RangeError(`profile: solving needs more than ${MAX_SOLVED_PIECES.toLocaleString('en')} stretches (thermal shutdown cycling too fast?); shorten the profile`);
+      }
+      if (observer) observeStretch(observer, sm, model, T, u, p.partPowerW, t, step, ambientC, scratch);
+      if (events) {
+        const drive = doc.profile.segments[segmentIndex].electrical;
+        if (drive) logDriveEvents(doc, events, p, drive.vinV, drive.voutV, drive.iloadA, t, step);
+      }
+      advance(model, T, u, step, T);
+      const last = tripped.length === 0 && step >= end - t;
+      t = last ? end : t + step;
+      // The crossing was found on the exact solution, so the state flips even when rounding leaves Tj a hair short of the level.
+      for (const d of tripped) {
+        on[d] = !on[d];
+        events?.add({ kind: on[d] ? 'resume' : 'shutdown', timeS: t, device: doc.devices[d].id, junctionC: T[sm.junction[d]] });
+      }
+      if (last || t >= end) return;
+    }
+  }
+
+  function finish(t: number, ambientC: number): void {
+    if (observer) sampleState(observer, t, T, ambientC);
+  }
+
+  return self;
+}

@@ -1,0 +1,102 @@
+import { AMBIENT, compileNetwork, type CauerStage, type ModalModel, type NetworkSpec } from '../thermal';
+import type { StudyDocument } from './types';
+import { buildStudyNetwork, caseNodeId, ENCLOSURE_NODE_ID, packageStages, sinkNodeId, sinkTargetNode } from './build-network';
+import { sinkRsa } from './convection';
+
+const MAX_CACHED_MODELS = 256;
+
+/**
+ * The compiled networks of a study. Sinks with natural convection make Rθsa depend on their
+ * rise, so models are compiled per set of Rθsa values, rounded to a geometric grid of ratio
+ * 1 + tolerance and cached: a value on the grid lies within tolerance/2 of the exact one.
+ */
+export type StudyModel = {
+  doc: StudyDocument;
+  /** Network with every Rθsa at its given value (the reference of natural convection). */
+  referenceSpec: NetworkSpec;
+  reference: ModalModel;
+  /** Node indices (same in every compiled model): per device, per sink, the enclosure or −1. */
+  junction: number[];
+  case: number[];
+  sink: number[];
+  /** Index of the node each sink's Rθsa leads to; −1 for the ambient. */
+  sinkTo: number[];
+  enclosure: number;
+  /** Sinks whose Rθsa depends on their rise. */
+  nonLinearSinks: number[];
+  tolerance: number;
+  /** Model for the rises in `temperatures` (°C per node) with ambient ambientC; `rsaOut` gets the Rθsa used. */
+  modelAt(temperatures: ArrayLike<number>, ambientC: number, rsaOut?: Float64Array): ModalModel;
+  /** Largest relative gap between the Rθsa a state calls for and `rsaUsed`. */
+  rsaMismatch(temperatures: ArrayLike<number>, ambientC: number, rsaUsed: ArrayLike<number>): number;
+  compiledCount(): number;
+};
+
+export function createStudyModel(doc: StudyDocument, tolerance: number): StudyModel {
+  const stages: CauerStage[][] = doc.devices.map((d) => packageStages(d.package));
+  const givenRsa = Float64Array.from(doc.sinks, (s) => s.rthKPerW);
+  const network = buildStudyNetwork(doc, stages, givenRsa);
+  const referenceSpec = network.spec;
+  const reference = compileNetwork(referenceSpec);
+  const index = (id: string) => reference.nodeIndex.get(id)!;
+  const junction = network.junctions.map(index);
+  const sink = doc.sinks.map((s) => index(sinkNodeId(s.id)));
+  const sinkTo = doc.sinks.map((s) => {
+    const target = sinkTargetNode(s.to);
+    return target === AMBIENT ? -1 : index(target);
+  });
+  const nonLinearSinks = doc.sinks.flatMap((s, i) => (s.naturalConvection ? [i] : []));
+  const cache = new Map<string, ModalModel>();
+  const logStep = Math.log1p(tolerance);
+  const rsa = new Float64Array(doc.sinks.length);
+
+  const rise = (T: ArrayLike<number>, ambientC: number, i: number) => T[sink[i]] - (sinkTo[i] < 0 ? ambientC : T[sinkTo[i]]);
+
+  function modelAt(T: ArrayLike<number>, ambientC: number, rsaOut?: Float64Array): ModalModel {
+    rsa.set(givenRsa);
+    if (nonLinearSinks.length === 0) {
+      rsaOut?.set(rsa);
+      return reference;
+    }
+    let key = '';
+    for (const i of nonLinearSinks) {
+      const exact = sinkRsa(doc.sinks[i], rise(T, ambientC, i));
+      const k = Math.round(Math.log(exact / givenRsa[i]) / logStep);
+      rsa[i] = givenRsa[i] * Math.exp(k * logStep);
+      key += `${k},`;
+    }
+    rsaOut?.set(rsa);
+    let model = cache.get(key);
+    if (!model) {
+      if (cache.size >= MAX_CACHED_MODELS) cache.clear();
+      model = compileNetwork(buildStudyNetwork(doc, stages, rsa).spec);
+      cache.set(key, model);
+    }
+    return model;
+  }
+
+  function rsaMismatch(T: ArrayLike<number>, ambientC: number, rsaUsed: ArrayLike<number>): number {
+    let worst = 0;
+    for (const i of nonLinearSinks) {
+      const exact = sinkRsa(doc.sinks[i], rise(T, ambientC, i));
+      worst = Math.max(worst, Math.abs(exact / rsaUsed[i] - 1));
+    }
+    return worst;
+  }
+
+  return {
+    doc,
+    referenceSpec,
+    reference,
+    junction,
+    case: doc.devices.map((d) => index(caseNodeId(d.id))),
+    sink,
+    sinkTo,
+    enclosure: doc.enclosure ? index(ENCLOSURE_NODE_ID) : -1,
+    nonLinearSinks,
+    tolerance,
+    modelAt,
+    rsaMismatch,
+    compiledCount: () => cache.size + 1,
+  };
+}
