@@ -7,6 +7,8 @@ import session from 'express-session';
 import helmet from 'helmet';
 import type { Config } from './config';
 import { createDb, type Db } from './db';
+import type { Deps } from './deps';
+import { createMailer } from './mail/mailer';
 import { AppError, errorHandler, notFoundHandler } from './errors';
 import { apiRouter } from './routes';
 
@@ -59,7 +61,8 @@ export function createApp(config: Config, db: Db = createDb(config.databaseUrl))
   );
 
   if (config.corsOrigins.length > 0) app.use('/api', cors({ origin: config.corsOrigins, credentials: true }));
-  app.use('/api', apiRouter(db, config));
+  const deps: Deps = { db, config, mailer: createMailer(db, { smtpUrl: config.smtpUrl, from: config.mailFrom }) };
+  app.use('/api', apiRouter(deps));
   app.use('/api', (req, _res, next) => next(new AppError(404, 'not_found', `No route for ${req.method} /api${req.path}`)));
 
   const indexHtml = path.join(config.webDir, 'index.html');

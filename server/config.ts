@@ -22,6 +22,8 @@ export type Config = {
   mailFrom: string;
   /** The outbox can be read through the API (never in production). */
   outboxReadable: boolean;
+  /** Sign-in, sign-up and reset attempts allowed per client address per 15 minutes. */
+  authRateLimit: number;
 };
 
 export class ConfigError extends Error {
@@ -100,9 +102,11 @@ export function loadConfig(env: Record<string, string | undefined> = process.env
     appUrl: (env.APP_URL ?? `http://localhost:${Number.isInteger(port) ? port : 8080}`).replace(/\/$/, ''),
     smtpUrl: env.SMTP_URL || undefined,
     mailFrom: env.MAIL_FROM ?? 'Junctura <no-reply@junctura.invalid>',
+    authRateLimit: Number(env.AUTH_RATE_LIMIT ?? (nodeEnv === 'test' ? 1000 : 30)),
     outboxReadable: nodeEnv !== 'production' && !env.SMTP_URL,
     corsOrigins: (env.CORS_ORIGINS ?? '').split(',').map((o) => o.trim()).filter(Boolean),
   };
+  if (!Number.isInteger(config.authRateLimit) || config.authRateLimit < 1) problems.push('AUTH_RATE_LIMIT must be a whole number of at least 1');
   if (config.smtpUrl && !/^smtps?:\/\//.test(config.smtpUrl)) problems.push('SMTP_URL must start with smtp:// or smtps://');
   if (!/^https?:\/\/[^/]+/.test(config.appUrl)) problems.push(`APP_URL must look like https://host (got "${config.appUrl}")`);
   for (const origin of config.corsOrigins) {

@@ -10,6 +10,8 @@ export class AppError extends Error {
     readonly code: string,
     message: string,
     readonly details?: ErrorDetail[],
+    /** Extra top-level fields of the error body, e.g. the current study on a save conflict. */
+    readonly extra?: Record<string, unknown>,
   ) {
     super(message);
     this.name = 'AppError';
@@ -44,7 +46,7 @@ type HttpishError = Error & { status?: number; statusCode?: number; type?: strin
 
 export const errorHandler: ErrorRequestHandler = (err: unknown, _req, res, _next) => {
   if (err instanceof AppError) {
-    res.status(err.status).json({ error: { code: err.code, message: err.message, details: err.details } });
+    res.status(err.status).json({ error: { code: err.code, message: err.message, details: err.details }, ...err.extra });
     return;
   }
   if (err instanceof YupValidationError) {

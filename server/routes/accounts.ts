@@ -1,15 +1,15 @@
 import { Router } from 'express';
 import { signUpSchema } from '../../src/validation/auth';
-import type { Config } from '../config';
-import type { Db } from '../db';
+import type { Deps } from '../deps';
+import { authRateLimit } from '../middleware/rate-limit';
 import { signUp } from '../services/auth-service';
 import { validateBody } from '../validate';
 import { establishSession } from './session';
 
-export function accountsRouter(db: Db, config: Config) {
+export function accountsRouter({ db, config }: Deps) {
   const router = Router();
 
-  router.post('/', async (req, res) => {
+  router.post('/', authRateLimit(config.authRateLimit), async (req, res) => {
     const input = validateBody(signUpSchema, req.body);
     const view = await signUp(db, input, config.bcryptCost);
     await establishSession(req, view.user.id);

@@ -1,21 +1,28 @@
 import express, { Router } from 'express';
-import type { Config } from '../config';
-import type { Db } from '../db';
+import type { Deps } from '../deps';
 import { accountsRouter } from './accounts';
+import { invitationsRouter } from './invitations';
+import { outboxRouter } from './outbox';
+import { passwordResetsRouter } from './password-resets';
 import { sessionRouter } from './session';
 import { studiesRouter } from './studies';
+import { teamsRouter } from './teams';
 
 /** The JSON API, mounted at /api. Reads top to bottom by resource. */
-export function apiRouter(db: Db, config: Config) {
+export function apiRouter(deps: Deps) {
   const api = Router();
   api.use(express.json({ limit: '2mb' }));
 
   api.get('/health', (_req, res) => {
     res.json({ ok: true });
   });
-  api.use('/session', sessionRouter(db, config));
-  api.use('/accounts', accountsRouter(db, config));
-  api.use('/studies', studiesRouter(db));
+  api.use('/session', sessionRouter(deps));
+  api.use('/accounts', accountsRouter(deps));
+  api.use('/password-resets', passwordResetsRouter(deps));
+  api.use('/invitations', invitationsRouter(deps));
+  api.use('/teams', teamsRouter(deps));
+  api.use('/studies', studiesRouter(deps));
+  api.use('/outbox', outboxRouter(deps));
 
   return api;
 }

@@ -1,8 +1,8 @@
 import { Router, type Request } from 'express';
 import { signInSchema } from '../../src/validation/auth';
-import type { Config } from '../config';
-import type { Db } from '../db';
+import type { Deps } from '../deps';
 import { requireAuth, authOf } from '../middleware/auth';
+import { authRateLimit } from '../middleware/rate-limit';
 import { signIn } from '../services/auth-service';
 import { validateBody } from '../validate';
 
@@ -17,10 +17,10 @@ export function establishSession(req: Request, userId: number): Promise<void> {
   });
 }
 
-export function sessionRouter(db: Db, config: Config) {
+export function sessionRouter({ db, config }: Deps) {
   const router = Router();
 
-  router.post('/', async (req, res) => {
+  router.post('/', authRateLimit(config.authRateLimit), async (req, res) => {
     const input = validateBody(signInSchema, req.body);
     const view = await signIn(db, input, config.bcryptCost);
     await establishSession(req, view.user.id);

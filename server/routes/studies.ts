@@ -1,39 +1,89 @@
 import { Router, type NextFunction, type Request, type Response } from 'express';
-import { studyCreateSchema } from '../../src/validation/studies';
-import type { Db } from '../db';
+import * as yup from 'yup';
+import { commentSchema, reviewSchema, studyCreateSchema, studySaveSchema } from '../../src/validation/studies';
+import type { Deps } from '../deps';
 import { authOf, requireAuth } from '../middleware/auth';
 import type { Study } from '../models';
-import { createStudy, findStudy, listStudies, studyView } from '../services/studies-service';
+import { addComment, deleteComment, listComments } from '../services/comments-service';
+import { listReviews, reviewStudy, submitForReview } from '../services/review-service';
+import { listRevisions, restoreRevision, revisionView } from '../services/revisions-service';
+import { createStudy, deleteStudy, duplicateStudy, findStudy, listStudies, saveStudy, studyView } from '../services/studies-service';
 import { validateBody } from '../validate';
+import { idParam } from './params';
 
-type StudyLocals = { study: Study };
+const restoreSchema = yup.object({ baseVersion: yup.number().integer().min(1).required('baseVersion is required') }).noUnknown(true, 'Unknown field: ${unknown}');
 
 /** Resolves `:id` to a study of one of the user's teams, or answers 404. */
-function loadStudy(db: Db) {
-  return async (req: Request<{ id: string }>, res: Response, next: NextFunction) => {
-    const id = /^\d{1,15}$/.test(req.params.id) ? Number(req.params.id) : NaN;
-    (res.locals as StudyLocals).study = await findStudy(db, authOf(res).memberships, id);
+function loadStudy(deps: Deps) {
+  return async (req: Request, res: Response, next: NextFunction) => {
+    res.locals.study = await findStudy(deps.db, authOf(res).memberships, idParam(req.params.id as string));
     next();
   };
 }
+const studyOf = (res: Response) => res.locals.study as Study;
 
-export function studiesRouter(db: Db) {
+export function studiesRouter(deps: Deps) {
+  const { db } = deps;
   const router = Router();
   router.use(requireAuth(db));
+  const load = loadStudy(deps);
 
+  // Studies
   router.get('/', async (_req, res) => {
     res.json({ studies: await listStudies(db, authOf(res).memberships) });
   });
-
   router.post('/', async (req, res) => {
-    const input = validateBody(studyCreateSchema, req.body);
-    const auth = authOf(res);
-    const study = await createStudy(db, auth.user.id, auth.memberships, input);
+    const study = await createStudy(db, authOf(res), validateBody(studyCreateSchema, req.body));
+    res.status(201).location(`/api/studies/${study.id}`).json({ study });
+  });
+  router.get('/:id', load, async (_req, res) => {
+    res.json({ study: await studyView(db, studyOf(res)) });
+  });
+  router.put('/:id', load, async (req, res) => {
+    res.json({ study: await saveStudy(db, authOf(res), studyOf(res), validateBody(studySaveSchema, req.body)) });
+  });
+  router.delete('/:id', load, async (_req, res) => {
+    await deleteStudy(db, authOf(res), studyOf(res));
+    res.status(204).end();
+  });
+  router.post('/:id/duplicate', load, async (_req, res) => {
+    const study = await duplicateStudy(db, authOf(res), studyOf(res));
     res.status(201).location(`/api/studies/${study.id}`).json({ study });
   });
 
-  router.get('/:id', loadStudy(db), (_req, res) => {
-    res.json({ study: studyView((res.locals as StudyLocals).study) });
+  // Review
+  router.post('/:id/submit', load, async (_req, res) => {
+    res.json({ study: await submitForReview(deps, authOf(res), studyOf(res)) });
+  });
+  router.post('/:id/review', load, async (req, res) => {
+    res.json({ study: await reviewStudy(deps, authOf(res), studyOf(res), validateBody(reviewSchema, req.body)) });
+  });
+  router.get('/:id/reviews', load, async (_req, res) => {
+    res.json({ reviews: await listReviews(deps, studyOf(res)) });
+  });
+
+  // Revisions
+  router.get('/:id/revisions', load, async (_req, res) => {
+    res.json({ revisions: await listRevisions(db, studyOf(res)) });
+  });
+  router.get('/:id/revisions/:number', load, async (req, res) => {
+    res.json(await revisionView(db, studyOf(res), idParam(req.params.number as string)));
+  });
+  router.post('/:id/revisions/:number/restore', load, async (req, res) => {
+    const { baseVersion } = validateBody(restoreSchema, req.body);
+    res.json({ study: await restoreRevision(db, authOf(res), studyOf(res), idParam(req.params.number as string), baseVersion) });
+  });
+
+  // Comments
+  router.get('/:id/comments', load, async (_req, res) => {
+    res.json({ comments: await listComments(db, studyOf(res)) });
+  });
+  router.post('/:id/comments', load, async (req, res) => {
+    res.status(201).json({ comment: await addComment(db, authOf(res), studyOf(res), validateBody(commentSchema, req.body)) });
+  });
+  router.delete('/:id/comments/:commentId', load, async (req, res) => {
+    await deleteComment(db, authOf(res), studyOf(res), idParam(req.params.commentId as string));
+    res.status(204).end();
   });
 
   return router;

@@ -3,6 +3,7 @@ import path from 'node:path';
 import type { Db } from '../db';
 import type { Role } from '../models';
 import { hashPassword } from '../services/auth-service';
+import { insertStudy } from '../services/studies-service';
 
 /** Invented demo data: printed in the README and by the server at start-up. */
 export const DEMO_PASSWORD = 'junctura-demo';
@@ -44,10 +45,7 @@ export async function seedDemo(db: Db, bcryptCost: number): Promise<boolean> {
     }
     const designer = users[1];
     for (const doc of docs) {
-      await db.models.Study.create(
-        { teamId: team.id, authorId: designer.id, title: doc.title, description: doc.description ?? '', document: doc },
-        { transaction },
-      );
+      await insertStudy(db, { teamId: team.id, authorId: designer.id, title: doc.title, description: doc.description ?? '', document: doc }, transaction);
     }
   });
   return true;

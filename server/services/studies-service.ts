@@ -1,9 +1,11 @@
-import { Op } from 'sequelize';
-import type { StudyCreateInput } from '../../src/validation/studies';
+import { Op, type Transaction } from 'sequelize';
+import type { StudyCreateInput, StudySaveInput } from '../../src/validation/studies';
 import type { Db } from '../db';
 import { AppError } from '../errors';
 import type { Role, Study } from '../models';
-import type { MembershipView } from './auth-service';
+import { recordEvent } from './audit-service';
+import type { MembershipView, SessionView } from './auth-service';
+import { requireStudyEditor } from './permissions';
 
 export const EDITOR_ROLES: readonly Role[] = ['owner', 'designer'];
 
@@ -19,7 +21,8 @@ export type StudySummary = {
   createdAt: string;
   updatedAt: string;
 };
-export type StudyView = StudySummary & { document: Record<string, unknown> | null };
+export type Approval = { revision: number; reviewer: { id: number; name: string } | null; at: string };
+export type StudyView = StudySummary & { document: Record<string, unknown> | null; approval: Approval | null };
 
 const include = [
   { association: 'author', attributes: ['id', 'name'] },
@@ -41,8 +44,24 @@ function summary(s: Study): StudySummary {
   };
 }
 
-export function studyView(s: Study): StudyView {
-  return { ...summary(s), document: s.document ?? null };
+/** The latest approval, shown only while the study is approved (editing starts a new draft). */
+async function currentApproval(db: Db, s: Study): Promise<Approval | null> {
+  if (s.status !== 'approved') return null;
+  const review = await db.models.Review.findOne({
+    where: { studyId: s.id, decision: 'approved' },
+    include: [{ association: 'reviewer', attributes: ['id', 'name'] }],
+    order: [['id', 'DESC']],
+  });
+  if (!review) return null;
+  return {
+    revision: review.revisionNumber,
+    reviewer: review.reviewer ? { id: review.reviewer.id, name: review.reviewer.name } : null,
+    at: review.createdAt.toISOString(),
+  };
+}
+
+export async function studyView(db: Db, s: Study): Promise<StudyView> {
+  return { ...summary(s), document: s.document ?? null, approval: await currentApproval(db, s) };
 }
 
 export async function listStudies(db: Db, memberships: MembershipView[]): Promise<StudySummary[]> {
@@ -60,9 +79,10 @@ export async function listStudies(db: Db, memberships: MembershipView[]): Promis
 /** Finds a study of one of the user's teams; anything else is "not found", never "forbidden". */
 export async function findStudy(db: Db, memberships: MembershipView[], id: number): Promise<Study> {
   const teamIds = memberships.map((m) => m.teamId);
-  const study = Number.isSafeInteger(id) && teamIds.length > 0
-    ? await db.models.Study.findOne({ where: { id, teamId: { [Op.in]: teamIds } }, include })
-    : null;
+  const study =
+    Number.isSafeInteger(id) && teamIds.length > 0
+      ? await db.models.Study.findOne({ where: { id, teamId: { [Op.in]: teamIds } }, include })
+      : null;
   if (!study) throw AppError.notFound('Study');
   return study;
 }
@@ -80,14 +100,93 @@ export function teamForNewStudy(memberships: MembershipView[], teamId?: number):
   return m;
 }
 
-export async function createStudy(db: Db, userId: number, memberships: MembershipView[], input: StudyCreateInput): Promise<StudyView> {
-  const team = teamForNewStudy(memberships, input.teamId);
-  const created = await db.models.Study.create({
-    teamId: team.teamId,
-    authorId: userId,
-    title: input.title,
-    description: input.description ?? '',
-    document: (input.document as Record<string, unknown> | undefined) ?? null,
+type NewStudy = { teamId: number; authorId: number; title: string; description: string; document: Record<string, unknown> | null };
+
+/** Inserts a study and its first revision. */
+export async function insertStudy(db: Db, s: NewStudy, transaction: Transaction): Promise<Study> {
+  const study = await db.models.Study.create({ ...s, version: 1 }, { transaction });
+  await db.models.Revision.create(
+    { studyId: study.id, number: 1, authorId: s.authorId, title: s.title, description: s.description, document: s.document },
+    { transaction },
+  );
+  return study;
+}
+
+export async function createStudy(db: Db, auth: SessionView, input: StudyCreateInput): Promise<StudyView> {
+  const team = teamForNewStudy(auth.memberships, input.teamId);
+  const id = await db.sequelize.transaction(async (transaction) => {
+    const study = await insertStudy(
+      db,
+      {
+        teamId: team.teamId,
+        authorId: auth.user.id,
+        title: input.title,
+        description: input.description ?? '',
+        document: (input.document as Record<string, unknown> | undefined) ?? null,
+      },
+      transaction,
+    );
+    await recordEvent(db, { teamId: team.teamId, actorId: auth.user.id, action: 'study.created', subjectType: 'study', subjectId: study.id, details: { title: input.title } }, transaction);
+    return study.id;
   });
-  return studyView(await findStudy(db, memberships, created.id));
+  return studyView(db, await findStudy(db, auth.memberships, id));
+}
+
+/**
+ * Saves a new revision when `baseVersion` is still current; otherwise 409 with the current
+ * study, so the client can show both versions and nothing is lost. Editing a study that is in
+ * review or approved turns it back into a draft: approvals belong to the revision they were on.
+ */
+export async function saveStudy(db: Db, auth: SessionView, study: Study, input: StudySaveInput, action = 'study.saved'): Promise<StudyView> {
+  requireStudyEditor(auth, study);
+  const conflict = async () =>
+    new AppError(409, 'version_conflict', `Someone saved this study first (now version ${study.version}); your changes are not saved yet`, undefined, {
+      current: await studyView(db, await findStudy(db, auth.memberships, study.id)),
+    });
+  if (input.baseVersion !== study.version) throw await conflict();
+
+  const next = {
+    title: input.title ?? study.title,
+    description: input.description ?? study.description,
+    document: input.document === undefined ? study.document : (input.document as Record<string, unknown> | null),
+  };
+  const saved = await db.sequelize.transaction(async (transaction) => {
+    const [count] = await db.models.Study.update(
+      { ...next, version: input.baseVersion + 1, status: 'draft' },
+      { where: { id: study.id, version: input.baseVersion }, transaction },
+    );
+    if (count === 0) return false;
+    await db.models.Revision.create({ studyId: study.id, number: input.baseVersion + 1, authorId: auth.user.id, ...next }, { transaction });
+    await recordEvent(
+      db,
+      { teamId: study.teamId, actorId: auth.user.id, action, subjectType: 'study', subjectId: study.id, details: { revision: input.baseVersion + 1, previousStatus: study.status } },
+      transaction,
+    );
+    return true;
+  });
+  if (!saved) {
+    await study.reload();
+    throw await conflict();
+  }
+  return studyView(db, await findStudy(db, auth.memberships, study.id));
+}
+
+export async function deleteStudy(db: Db, auth: SessionView, study: Study) {
+  requireStudyEditor(auth, study);
+  await db.sequelize.transaction(async (transaction) => {
+    await recordEvent(db, { teamId: study.teamId, actorId: auth.user.id, action: 'study.deleted', subjectType: 'study', subjectId: study.id, details: { title: study.title } }, transaction);
+    await study.destroy({ transaction });
+  });
+}
+
+/** A copy of the current revision as a new draft of the user's own. */
+export async function duplicateStudy(db: Db, auth: SessionView, study: Study): Promise<StudyView> {
+  const m = teamForNewStudy(auth.memberships, study.teamId);
+  const title = `${study.title} (copy)`.slice(0, 200);
+  const id = await db.sequelize.transaction(async (transaction) => {
+    const copy = await insertStudy(db, { teamId: m.teamId, authorId: auth.user.id, title, description: study.description, document: study.document }, transaction);
+    await recordEvent(db, { teamId: m.teamId, actorId: auth.user.id, action: 'study.duplicated', subjectType: 'study', subjectId: copy.id, details: { from: study.id } }, transaction);
+    return copy.id;
+  });
+  return studyView(db, await findStudy(db, auth.memberships, id));
 }
