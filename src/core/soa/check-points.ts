@@ -1,0 +1,73 @@
+import { checkCondition, lowestLimit } from './allowed-current';
+import { checkNumber } from './check';
+import { checkSoaModel } from './check-model';
+import { LINEAR_MODE_MESSAGE, needsLinearModeWarning } from './linear-mode';
+import { pulseFor } from './pulse-for';
+import { soaPieces } from './soa-pieces';
+import type { PulseWidth, SoaCheck, SoaLimit, SoaModel, SoaOperatingPoint, SoaWarning, SoaWorstPoint } from './types';
+
+/**
+ * Checks every operating point against the SOA at its own case temperature and duration
+ * (PHYSICS.md §4): margin Iallowed / Ic per point, the worst point and when it happens,
+ * pass when every margin is at least 1. A stretch is a single pulse from the case
+ * temperature it starts at; heat left from earlier stretches is in that case temperature.
+ */
+export function checkOperatingPoints(model: SoaModel, points: readonly SoaOperatingPoint[]): SoaCheck {
+  checkSoaModel(model);
+  if (!Array.isArray(points)) throw new TypeError('points: expected an array of operating points');
+  const n = points.length;
+  const allowedA = new Float64Array(n);
+  const margin = new Float64Array(n);
+  const limits: SoaLimit[] = new Array(n);
+  const pulses: PulseWidth[] = new Array(n);
+  let worst = -1;
+  let failedCount = 0;
+  let linear: SoaWarning | null = null;
+  for (let k = 0; k < n; k++) {
+    const p = points[k];
+    const path = `points[${k}]`;
+    checkNumber(p.timeS, `${path}.timeS`);
+    checkNumber(p.durationS, `${path}.durationS`, 0);
+    checkNumber(p.vceV, `${path}.vceV`, 0);
+    checkNumber(p.icA, `${path}.icA`, 0);
+    const pulse = pulseFor(model, p.durationS);
+    // A zero-length stretch is a pulse of no width: nothing heats, only the current and voltage limits apply.
+    const cond = { caseC: p.caseC, pulseS: pulse === 0 ? Number.MIN_VALUE : pulse };
+    checkCondition(cond, path);
+    const { pieces, vceMaxV } = soaPieces(model, cond);
+    const a = lowestLimit(pieces, vceMaxV, p.vceV);
+    allowedA[k] = a.currentA;
+    limits[k] = a.limit;
+    pulses[k] = pulse;
+    margin[k] = p.icA > 0 ? a.currentA / p.icA : Infinity;
+    if (margin[k] < 1) failedCount++;
+    if (worst < 0 || margin[k] < margin[worst] || (margin[k] === margin[worst] && p.timeS < points[worst].timeS)) worst = k;
+    if (p.icA > 0 && needsLinearModeWarning(model, pulse, p.durationS)) {
+      if (!linear) linear = { code: 'mosfet-linear-mode', message: LINEAR_MODE_MESSAGE, count: 0, firstIndex: k, firstTimeS: p.timeS };
+      linear.count++;
+      if (p.timeS < linear.firstTimeS) Object.assign(linear, { firstIndex: k, firstTimeS: p.timeS });
+    }
+  }
+  const worstPoint: SoaWorstPoint | null =
+    worst < 0
+      ? null
+      : { ...points[worst], index: worst, pulseS: pulses[worst], allowedA: allowedA[worst], margin: margin[worst], limit: limits[worst] };
+  return { allowedA, margin, limits, pulses, worst: worstPoint, failedCount, passed: failedCount === 0, warnings: linear ? [linear] : [] };
+}
+
+/** An operating point from the drive of n identical parts sharing the load: Vce = Vin − Vout, Ic = Iload / n. */
+export function operatingPointFromDrive(d: {
+  timeS: number;
+  durationS: number;
+  vinV: number;
+  voutV: number;
+  iloadA: number;
+  parts: number;
+  caseC: number;
+}): SoaOperatingPoint {
+  checkNumber(d.parts, 'parts', 1);
+  if (!Number.isInteger(d.parts)) throw new RangeError(`parts: must be a whole number, got ${d.parts}`);
+  const vce = d.vinV - d.voutV;
+  if (vce < 0) throw new RangeError(`voutV: lies above vinV (${d.voutV} V > ${d.vinV} V); a pass element cannot raise its output`);
+  return { timeS: d.timeS, durationS: d.durationS, vceV: vce, icA: d.iloadA / d.parts, caseC: d.caseC };
+}
