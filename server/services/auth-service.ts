@@ -14,6 +14,10 @@ export function hashPassword(password: string, cost: number): Promise<string> {
   return bcrypt.hash(password, cost);
 }
 
+export function verifyPassword(password: string, hash: string): Promise<boolean> {
+  return bcrypt.compare(password, hash);
+}
+
 export async function sessionView(db: Db, userId: number): Promise<SessionView | null> {
   const user = await db.models.User.findByPk(userId, {
     include: [{ association: 'memberships', include: [{ association: 'team' }] }],

@@ -5,7 +5,7 @@ import { AppError } from '../errors';
 import { invitationMail } from '../mail/templates';
 import type { Invitation, Role } from '../models';
 import { recordEvent } from './audit-service';
-import { hashPassword, type SessionView } from './auth-service';
+import { hashPassword, verifyPassword, type SessionView } from './auth-service';
 import { membershipIn, requireRole } from './permissions';
 import { hashToken, newToken } from './tokens';
 
@@ -91,12 +91,11 @@ export async function describeInvitation(deps: Deps, token: string) {
  */
 export async function acceptInvitation(deps: Deps, token: string, input: AcceptInvitationInput, signedInUserId?: number): Promise<number> {
   const { db, config } = deps;
-  const bcrypt = await import('bcryptjs');
   const i = await usableInvitation(deps, token);
   let user = await db.models.User.findOne({ where: { email: i.email } });
   if (user) {
     const provedBySession = signedInUserId === user.id;
-    const provedByPassword = !!input.password && (await bcrypt.compare(input.password, user.passwordHash));
+    const provedByPassword = !!input.password && (await verifyPassword(input.password, user.passwordHash));
     if (!provedBySession && !provedByPassword) {
       throw new AppError(401, 'invalid_credentials', `Sign in as ${i.email} or give that account's password to accept`, [
         { path: 'password', message: 'is not the password of the invited account' },
