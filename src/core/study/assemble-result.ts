@@ -38,6 +38,7 @@ export function assembleResult(input: AssembleInput): StudyResult {
     const peak = obs.peakC[2 * i];
     const result: DeviceResult = {
       id: d.id,
+      ...(d.name !== undefined ? { name: d.name } : {}),
       count: d.count,
       sink: d.sink,
       peakJunctionC: peak,
@@ -54,7 +55,6 @@ export function assembleResult(input: AssembleInput): StudyResult {
       energyJ: obs.partEnergyJ[i],
       shutdowns: events.trips.get(d.id) ?? 0,
     };
-    if (d.name !== undefined) result.name = d.name;
     devices[d.id] = result;
   });
   const eventTotal = Object.values(events.counts).reduce((a, b) => a + b, 0);
@@ -64,8 +64,13 @@ export function assembleResult(input: AssembleInput): StudyResult {
   const firstSink = 2 * doc.devices.length;
   const sinks: Record<string, SinkResult> = {};
   doc.sinks.forEach((s, i) => {
-    const result: SinkResult = { id: s.id, peakC: obs.peakC[firstSink + i], peakTimeS: obs.peakTimeS[firstSink + i], rthKPerW: s.rthKPerW };
-    if (s.name !== undefined) result.name = s.name;
+    const result: SinkResult = {
+      id: s.id,
+      ...(s.name !== undefined ? { name: s.name } : {}),
+      peakC: obs.peakC[firstSink + i],
+      peakTimeS: obs.peakTimeS[firstSink + i],
+      rthKPerW: s.rthKPerW,
+    };
     const range = input.rsaRange?.[i];
     if (s.naturalConvection && range && Number.isFinite(range[0])) result.rthRangeKPerW = range;
     sinks[s.id] = result;
@@ -98,7 +103,8 @@ export function assembleResult(input: AssembleInput): StudyResult {
   assertFinite(result, 'result');
   if (obs.series) result.series = obs.series.build();
   if (obs.rows) {
-    result.table = { ...obs.rows.table(), peakRows: obs.peakRows.filter((r): r is Float64Array => r !== null) };
+    const peakRows = obs.peakRows.flatMap((row, w) => (row ? [{ node: obs.keys[w], row }] : []));
+    result.table = { ...obs.rows.table(), peakRows };
   }
   return result;
 }

@@ -3,7 +3,7 @@ export * from './types';
 export { parseStudy } from './parse-study';
 export { evaluateStudy } from './evaluate-study';
 export type { EvaluateOptions } from './evaluate-study';
-export type { StudyResult, DeviceResult, SinkResult } from './result-types';
+export type { StudyResult, DeviceResult, SinkResult, PeakRow } from './result-types';
 export type { StudyEvent, EventKind } from './event-log';
 export type { Series } from './series-recorder';
 export type { BoundaryTable } from './boundary-table';

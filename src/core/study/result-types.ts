@@ -2,6 +2,9 @@ import type { EventKind, StudyEvent } from './event-log';
 import type { Series } from './series-recorder';
 import type { BoundaryTable } from './boundary-table';
 
+/** Node temperatures (time, the table's columns) at the peak of `node`. */
+export type PeakRow = { node: string; row: Float64Array };
+
 /** Results of one device entry (temperatures of each of its `count` identical parts). */
 export type DeviceResult = {
   id: string;
@@ -61,7 +64,7 @@ export type StudyResult = {
   /** Chart series per node (`Q1.junction`, `Q1.case`, `S1.sink`, `enclosure.air`, `ambient`), °C. */
   series?: Record<string, Series>;
   /** With `boundaryRows`: node temperatures at every solved boundary, and a row at each peak. */
-  table?: BoundaryTable & { peakRows: Float64Array[] };
+  table?: BoundaryTable & { peakRows: PeakRow[] };
   solver: {
     method: 'batch' | 'event-driven';
     /** Constant-input stretches solved in the reported run. */
