@@ -1,7 +1,7 @@
 import { lowestLimit, checkCondition } from './allowed-current';
 import { checkNumber } from './check';
 import { checkSoaModel } from './check-model';
-import { SOA_CHART_DECADES, SOA_CHART_FLOOR_RATIO } from './constants';
+import { SOA_CHART_DECADES, SOA_CHART_FLOOR_RATIO, SOA_STRAIGHT_SLOPE_TOL } from './constants';
 import { lineCrossing, pieceLines } from './log-piece';
 import { soaPieces } from './soa-pieces';
 import type { SoaBoundary, SoaBoundarySegment, SoaCondition, SoaModel } from './types';
@@ -51,10 +51,24 @@ export function soaBoundary(model: SoaModel, cond: SoaCondition, options: Bounda
     if (current && current.limit === limit) current.points.push(end);
     else segments.push({ limit, points: [{ vceV: v0, icA: at(v0).currentA }, end] });
   }
+  for (const seg of segments) seg.points = dropStraightRuns(seg.points);
   if (top === limitV && segments.length > 0) {
     const last = segments[segments.length - 1].points;
     const ic = last[last.length - 1].icA;
     if (ic > 0) segments.push({ limit: 'voltage', points: [{ vceV: top, icA: ic }, { vceV: top, icA: ic * SOA_CHART_FLOOR_RATIO }] });
   }
   return { condition: cond, segments, vceMaxV: limitV };
+}
+
+/** Drops interior points where the line does not bend in log-log (crossings of limits that do not apply). */
+function dropStraightRuns(points: SoaBoundarySegment['points']): SoaBoundarySegment['points'] {
+  if (points.length < 3 || points.some((p) => !(p.icA > 0))) return points;
+  const slope = (a: (typeof points)[number], b: (typeof points)[number]) => Math.log(b.icA / a.icA) / Math.log(b.vceV / a.vceV);
+  const kept = [points[0]];
+  for (let k = 1; k + 1 < points.length; k++) {
+    const prev = kept[kept.length - 1];
+    if (Math.abs(slope(prev, points[k]) - slope(points[k], points[k + 1])) > SOA_STRAIGHT_SLOPE_TOL) kept.push(points[k]);
+  }
+  kept.push(points[points.length - 1]);
+  return kept;
 }

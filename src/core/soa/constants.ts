@@ -23,3 +23,6 @@ export const SOA_CHART_DECADES = 2;
 
 /** The vertical at the voltage limit drops to this fraction of the current there. */
 export const SOA_CHART_FLOOR_RATIO = 0.1;
+
+/** Boundary points where the log-log slope changes by less than this are dropped from charts. */
+export const SOA_STRAIGHT_SLOPE_TOL = 1e-9;
