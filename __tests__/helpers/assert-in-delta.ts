@@ -1,15 +1,18 @@
-/**
- * Fails unless |actual − expected| ≤ delta, with a message that shows all three (jest's
- * toBeCloseTo only takes decimal digits, which does not fit values far from 1).
- */
-export function assertInDelta(actual: number, expected: number, delta: number, what = 'value'): void {
-  if (!Number.isFinite(delta) || delta < 0) throw new RangeError(`delta: must be finite and ≥ 0, got ${delta}`);
-  if (Number.isNaN(actual) || !(Math.abs(actual - expected) <= delta)) {
-    throw new Error(`${what}: expected ${expected} ± ${delta}, got ${actual} (off by ${actual - expected})`);
+/** Shared numeric assertions: absolute and relative closeness, with the label in the failure. */
+
+/** Fails unless |actual − expected| ≤ tol. */
+export function assertInDelta(actual: number, expected: number, tol: number, label = 'value'): void {
+  const error = Math.abs(actual - expected);
+  if (!(error <= tol)) {
+    throw new Error(`${label}: expected ${expected} ± ${tol}, got ${actual} (off by ${error})`);
   }
 }
 
-/** assertInDelta with the tolerance as a fraction of |expected|. */
-export function assertRelative(actual: number, expected: number, rel: number, what = 'value'): void {
-  assertInDelta(actual, expected, rel * Math.abs(expected), what);
+/** Fails unless |actual − expected| ≤ relTol · |expected| (plus absTol, default 0). */
+export function assertInRelDelta(actual: number, expected: number, relTol: number, label = 'value', absTol = 0): void {
+  const error = Math.abs(actual - expected);
+  const allowed = relTol * Math.abs(expected) + absTol;
+  if (!(error <= allowed)) {
+    throw new Error(`${label}: expected ${expected} within ${relTol} relative, got ${actual} (relative error ${error / Math.abs(expected)})`);
+  }
 }

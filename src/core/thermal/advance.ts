@@ -22,7 +22,12 @@ export function advance(
   modalFromTemperatures(model, temperatures, x);
   modalEquilibrium(model, u, xInf);
   advanceModes(model.rates, x, xInf, h);
-  return temperaturesFromModal(model, x, u, out);
+  if (h > 0) return temperaturesFromModal(model, x, u, out);
+  // No time passes: keep the stored temperatures bit for bit, update massless nodes only.
+  const { nodeCount: N, massless } = model;
+  const fed = temperaturesFromModal(model, x, u);
+  for (let i = 0; i < N; i++) out[i] = massless[i] === 1 ? fed[i] : temperatures[i];
+  return out;
 }
 
 /** x ← x∞ + e^(−λh)(x − x∞), written with expm1 so short steps keep their precision. */

@@ -90,6 +90,7 @@ export function compileNetwork(spec: NetworkSpec): ModalModel {
     powerInputCount: q - 1,
     inputCount: q,
     modeCount: n,
+    massless: Uint8Array.from({ length: N }, (_, i) => (spec.nodes[i].capacityJPerK > 0 ? 0 : 1)),
     rates,
     outputFromModes: W,
     outputFromInputs: D,

@@ -4,7 +4,7 @@ import { solveSpd } from './dense';
 /**
  * Static condensation of massless nodes (C = 0): with d the nodes with capacity and s the
  * others, 0 = −G_sd T_d − G_ss T_s + B_s u gives T_s = M T_d + E u, and the reduced system
- * C_d dT_d/dt = −G_r T_d + B_r u with G_r = G_dd + G_ds M, B_r = B_d + G_ds E.
+ * C_d dT_d/dt = −G_r T_d + B_r u with G_r = G_dd + G_ds M, B_r = B_d − G_ds E.
  */
 export type CondensedNetwork = {
   dynamic: Int32Array;
@@ -47,7 +47,7 @@ export function condenseNetwork(net: AssembledNetwork): CondensedNetwork {
     }
     for (let k = 0; k < q; k++) {
       let v = B[dyn[p] * q + k];
-      for (let a = 0; a < s; a++) v += G[dyn[p] * N + mass[a]] * E[a * q + k];
+      for (let a = 0; a < s; a++) v -= G[dyn[p] * N + mass[a]] * E[a * q + k];
       br[p * q + k] = v;
     }
   }

@@ -26,3 +26,9 @@ export const FOSTER_TAU_MERGE_REL_TOL = 1e-12;
 
 /** Lanczos stops (the ladder is complete) when a new direction is this small, relative. */
 export const LANCZOS_BREAKDOWN_REL_TOL = 1e-13;
+
+/** Recent input vectors and durations whose x∞ and e^(−λh) runProfile keeps. */
+export const PROFILE_CACHE_SIZE = 4;
+
+/** Modal rates within this fraction of their cluster's slowest are bounded together. */
+export const BOUND_CLUSTER_REL = 0.01;

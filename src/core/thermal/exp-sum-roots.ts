@@ -112,8 +112,11 @@ export function shifted(coef: Float64Array, rate: Float64Array, base: number, co
   return v;
 }
 
-/** Safeguarded Newton on e^(r_0 τ) g(τ) in a bracket where it is monotone and changes sign. */
-function refine(
+/**
+ * Safeguarded Newton on e^(r_0 τ) g(τ) (sum at base) in a bracket [a, b] where it changes
+ * sign (ea is its value at a); bisection keeps it converging whatever the shape.
+ */
+export function refine(
   coef: Float64Array,
   rate: Float64Array,
   base: number,

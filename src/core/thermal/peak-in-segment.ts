@@ -23,6 +23,7 @@ export function peakInSegment(
   checkVector(u, 'u', model.inputCount);
   checkNumber(h, 'h', 0);
   checkIndex(nodeIndex, 'nodeIndex', model.nodeCount);
+  if (h === 0 && model.massless[nodeIndex] === 0) return { valueC: temperatures[nodeIndex], timeS: 0 };
   const { x, xInf, sum } = model.scratch;
   modalFromTemperatures(model, temperatures, x);
   modalEquilibrium(model, u, xInf);

@@ -1,103 +1,197 @@
 import { checkIndex, checkVector, describe } from './check-input';
-import { PEAK_SEARCH_ABS_TOL } from './constants';
+import { PEAK_SEARCH_ABS_TOL, PROFILE_CACHE_SIZE } from './constants';
+import type { ExpSumWorkspace } from './exp-sum-roots';
+import { interiorPeak } from './interior-peak';
+import { clusterGaps, clusterModes, type ModeClusters } from './mode-clusters';
 import { modalFromTemperatures, temperaturesFromModal } from './modal-state';
-import { loadNodeResponse, maximumOfSum } from './node-response';
 import { periodicModes } from './periodic-start';
 import type { ModalModel, Peak, Profile, RunOptions, RunResult } from './types';
 
 /**
  * Runs a long piecewise-constant profile in modal coordinates (exact, PHYSICS.md §3).
  *
- * Per segment and mode: one multiply-add for x∞ per input (skipped while u repeats), one
- * exp (skipped while h repeats) and the state update; per watched node a bound
- * a_0 + Σ max(a_k, a_k e^(−λ_k h)) ≥ max f on [0, h], so the exact interior search runs
- * only when a segment could raise the peak. Memory is fixed unless recordBoundaries is set.
+ * Per segment and mode: the update x ← x∞ + e^(−λh)(x − x∞); x∞ = F u and e^(−λh) come
+ * from a small cache of recent inputs and durations (PROFILE_CACHE_SIZE), so repeating
+ * patterns cost no exp. Per watched node, an upper bound of f on [0, h] (each cluster of
+ * near-equal rates through its slowest one, see clusterModes) skips segments that cannot
+ * raise the peak; the exact interior search (interiorPeak) runs only when one could. Memory is fixed unless recordBoundaries is set.
  *
- * Peaks are exact maxima over the whole profile, earliest time on a tie, times in s from
- * its start. Zero-length segments take no time and so cannot hold a peak. Bad durations or
- * inputs throw RangeError / TypeError naming `profile.durations[s]` or `profile.inputs[i]`.
+ * Peaks are exact maxima over the whole profile (earliest time on a tie; s from its start).
+ * Zero-length segments take no time and hold no peak. Bad durations or inputs throw
+ * RangeError / TypeError naming `profile.durations[s]` or `profile.inputs[i]`.
  */
 export function runProfile(model: ModalModel, profile: Profile, options: RunOptions = {}): RunResult {
-  const { modeCount: n, nodeCount: N, inputCount: q, rates, outputFromModes: W, outputFromInputs: D } = model;
+  const { modeCount: n, nodeCount: N, inputCount: q, outputFromModes: W, outputFromInputs: D } = model;
   const { durations, inputs } = checkProfile(profile, q);
-  const S = durations.length;
   const watch = Int32Array.from(options.watchNodes ?? [], (j, w) => checkIndex(j, `options.watchNodes[${w}]`, N));
   const nw = watch.length;
 
   const x = new Float64Array(n);
-  const xInf = new Float64Array(n);
-  const decay = new Float64Array(n);
-  const u = new Float64Array(q);
-  const a0 = new Float64Array(nw);
-  const peakValue = new Float64Array(nw).fill(-Infinity);
-  const peakTime = new Float64Array(nw);
-  const found = new Float64Array(2);
-  const ws = model.scratch.sum;
-  const W0 = new Float64Array(nw * n); // watched rows of W, contiguous
-  for (let w = 0; w < nw; w++) for (let k = 0; k < n; k++) W0[w * n + k] = W[watch[w] * n + k];
-
-  for (let j = 0; j < q; j++) u[j] = inputs[j];
+  const u = Float64Array.from({ length: q }, (_, j) => inputs[j]);
   if (options.periodic) {
     periodicModes(model, durations, inputs, x, 'profile.durations');
   } else if (options.initial !== undefined) {
     checkVector(options.initial, 'options.initial', N);
     modalFromTemperatures(model, options.initial, x);
   } else {
-    const cold = new Float64Array(N).fill(u[q - 1]);
-    modalFromTemperatures(model, cold, x);
+    modalFromTemperatures(model, new Float64Array(N).fill(u[q - 1]), x);
   }
   const initial = temperaturesFromModal(model, x, u);
-
+  const S = durations.length;
   const record = options.recordBoundaries === true;
-  const boundaries = record ? new Float64Array((S + 1) * N) : undefined;
-  const boundaryTimes = record ? new Float64Array(S + 1) : undefined;
-  if (boundaries) boundaries.set(initial, 0);
+  const boundaries = record ? new Float64Array((S + 1) * N) : new Float64Array(0);
+  const boundaryTimes = record ? new Float64Array(S + 1) : new Float64Array(0);
+  if (record) boundaries.set(initial, 0);
 
-  const F = model.modesFromInputs;
-  let lastH = NaN;
-  let changed = true;
+  const watchRows = new Float64Array(nw * n);
+  const watchFeed = new Float64Array(nw * q);
+  for (let w = 0; w < nw; w++) {
+    for (let k = 0; k < n; k++) watchRows[w * n + k] = W[watch[w] * n + k];
+    for (let j = 0; j < q; j++) watchFeed[w * q + j] = D[watch[w] * q + j];
+  }
+  const peakValue = new Float64Array(nw).fill(-Infinity);
+  const peakTime = new Float64Array(nw);
+  const state: BoundaryState = { model, x, u: new Float64Array(q), inputs, boundaries, boundaryTimes };
+  runSegments(
+    toFloat64(durations),
+    toFloat64(inputs),
+    model.rates,
+    model.modesFromInputs,
+    watchRows,
+    watchFeed,
+    x,
+    peakValue,
+    peakTime,
+    model.scratch.sum,
+    clusterModes(model.rates),
+    q,
+    record ? (s: number, t: number) => recordBoundary(state, s, t) : null,
+  );
+
+  const peaks: Peak[] = [];
+  for (let w = 0; w < nw; w++) {
+    // A profile of zero total length has one instant, its start.
+    if (peakValue[w] === -Infinity) peaks.push({ valueC: initial[watch[w]], timeS: 0 });
+    else peaks.push({ valueC: peakValue[w], timeS: peakTime[w] });
+  }
+  for (let j = 0; j < q; j++) u[j] = inputs[(S - 1) * q + j];
+  const result: RunResult = { peaks, final: temperaturesFromModal(model, x, u), initial };
+  if (record) {
+    result.boundaries = boundaries;
+    result.boundaryTimes = boundaryTimes;
+  }
+  return result;
+}
+
+type BoundaryState = {
+  model: ModalModel;
+  x: Float64Array;
+  u: Float64Array;
+  inputs: ArrayLike<number>;
+  boundaries: Float64Array;
+  boundaryTimes: Float64Array;
+};
+
+/** Stores the state at the end of segment s, massless nodes at that segment's inputs. */
+function recordBoundary(state: BoundaryState, s: number, t: number): void {
+  const { model, x, u, inputs, boundaries, boundaryTimes } = state;
+  const N = model.nodeCount;
+  const q = model.inputCount;
+  for (let j = 0; j < q; j++) u[j] = inputs[s * q + j];
+  temperaturesFromModal(model, x, u, boundaries.subarray((s + 1) * N, (s + 2) * N));
+  boundaryTimes[s + 1] = t;
+}
+
+/**
+ * The segment loop, on typed arrays only so that it stays monomorphic. Cache slots hold
+ * x∞ (and each watched node's a_0) per recent input vector, e^(−λh) per recent duration.
+ */
+function runSegments(
+  durations: Float64Array,
+  inputs: Float64Array,
+  rates: Float64Array,
+  F: Float64Array,
+  watchRows: Float64Array,
+  watchFeed: Float64Array,
+  x: Float64Array,
+  peakValue: Float64Array,
+  peakTime: Float64Array,
+  ws: ExpSumWorkspace,
+  clusters: ModeClusters,
+  q: number,
+  onBoundary: ((s: number, t: number) => void) | null,
+): void {
+  const n = rates.length;
+  const nw = peakValue.length;
+  const C = PROFILE_CACHE_SIZE;
+  const cacheU = new Float64Array(C * q).fill(NaN);
+  const cacheXInf = new Float64Array(C * n);
+  const cacheA0 = new Float64Array(C * nw);
+  const cacheH = new Float64Array(C).fill(NaN);
+  const cacheDecay = new Float64Array(C * n);
+  const cacheGap = new Float64Array(C * n);
+  const { leader, last } = clusters;
+  const found = new Float64Array(2);
+  let nextU = 0;
+  let nextH = 0;
+  let slotU = -1;
+  let slotH = -1;
   let t = 0;
-  for (let s = 0; s < S; s++) {
-    const h = durations[s];
+  for (let s = 0; s < durations.length; s++) {
     const row = s * q;
-    for (let j = 0; j < q; j++) {
-      const v = inputs[row + j];
-      if (v !== u[j]) {
-        u[j] = v;
-        changed = true;
+    // Input cache: same slot as last segment is the common case.
+    if (slotU < 0 || !sameRow(cacheU, slotU * q, inputs, row, q)) {
+      slotU = -1;
+      for (let c = 0; c < C; c++) {
+        if (sameRow(cacheU, c * q, inputs, row, q)) {
+          slotU = c;
+          break;
+        }
+      }
+      if (slotU < 0) {
+        slotU = nextU;
+        nextU = (nextU + 1) % C;
+        fillInputSlot(slotU, inputs, row, q, n, nw, F, watchRows, watchFeed, cacheU, cacheXInf, cacheA0);
       }
     }
-    if (changed) {
-      changed = false;
-      for (let k = 0; k < n; k++) {
-        let v = 0;
-        for (let j = 0; j < q; j++) v += F[k * q + j] * u[j];
-        xInf[k] = v;
-      }
-      for (let w = 0; w < nw; w++) {
-        const i = watch[w];
-        let v = 0;
-        for (let k = 0; k < n; k++) v += W0[w * n + k] * xInf[k];
-        for (let j = 0; j < q; j++) v += D[i * q + j] * u[j];
-        a0[w] = v;
-      }
-    }
+    const h = durations[s];
     if (h > 0) {
-      if (h !== lastH) {
-        lastH = h;
-        for (let k = 0; k < n; k++) decay[k] = Math.exp(-rates[k] * h);
+      if (slotH < 0 || cacheH[slotH] !== h) {
+        slotH = -1;
+        for (let c = 0; c < C; c++) {
+          if (cacheH[c] === h) {
+            slotH = c;
+            break;
+          }
+        }
+        if (slotH < 0) {
+          slotH = nextH;
+          nextH = (nextH + 1) % C;
+          cacheH[slotH] = h;
+          for (let k = 0; k < n; k++) cacheDecay[slotH * n + k] = Math.exp(-rates[k] * h);
+          clusterGaps(clusters, cacheDecay, slotH * n, h, cacheGap, slotH * n);
+        }
       }
+      const xb = slotU * n;
+      const db = slotH * n;
       for (let w = 0; w < nw; w++) {
         const base = w * n;
-        let start = a0[w];
-        let end = a0[w];
-        let bound = a0[w];
+        const a0 = cacheA0[slotU * nw + w];
+        let start = a0;
+        let end = a0;
+        let bound = a0;
+        let cluster = 0;
         for (let k = 0; k < n; k++) {
-          const a = W0[base + k] * (x[k] - xInf[k]);
-          const ae = a * decay[k];
+          const a = watchRows[base + k] * (x[k] - cacheXInf[xb + k]);
           start += a;
-          end += ae;
-          bound += a > ae ? a : ae;
+          end += a * cacheDecay[db + k];
+          cluster += a;
+          bound += (a < 0 ? -a : a) * cacheGap[db + k];
+          if (last[k] === 1) {
+            const ce = cluster * cacheDecay[db + leader[k]];
+            bound += cluster > ce ? cluster : ce;
+            cluster = 0;
+          }
         }
         let best = peakValue[w];
         if (bound <= best + PEAK_SEARCH_ABS_TOL) continue;
@@ -109,38 +203,61 @@ export function runProfile(model: ModalModel, profile: Profile, options: RunOpti
           best = end;
           peakTime[w] = t + h;
         }
-        if (bound > best + PEAK_SEARCH_ABS_TOL) {
-          // Modal terms of both signs: an interior maximum may exceed both ends.
-          loadNodeResponse(model, ws, watch[w], x, xInf, u, 0, 1);
-          maximumOfSum(ws, h, found);
-          if (found[0] > best) {
-            best = found[0];
-            peakTime[w] = t + found[1];
-          }
+        if (
+          bound > best + PEAK_SEARCH_ABS_TOL &&
+          interiorPeak(ws, rates, clusters, cacheDecay, cacheGap, db, watchRows, base, x, cacheXInf, xb, a0, h, found) &&
+          found[0] > best
+        ) {
+          best = found[0];
+          peakTime[w] = t + found[1];
         }
         peakValue[w] = best;
       }
-      for (let k = 0; k < n; k++) x[k] = xInf[k] + decay[k] * (x[k] - xInf[k]);
+      for (let k = 0; k < n; k++) {
+        const xi = cacheXInf[xb + k];
+        x[k] = xi + cacheDecay[db + k] * (x[k] - xi);
+      }
       t += h;
     }
-    if (boundaries && boundaryTimes) {
-      temperaturesFromModal(model, x, u, boundaries.subarray((s + 1) * N, (s + 2) * N));
-      boundaryTimes[s + 1] = t;
-    }
+    if (onBoundary !== null) onBoundary(s, t);
   }
+}
 
-  const peaks: Peak[] = [];
+function sameRow(a: Float64Array, ia: number, b: Float64Array, ib: number, q: number): boolean {
+  for (let j = 0; j < q; j++) if (a[ia + j] !== b[ib + j]) return false;
+  return true;
+}
+
+function fillInputSlot(
+  slot: number,
+  inputs: Float64Array,
+  row: number,
+  q: number,
+  n: number,
+  nw: number,
+  F: Float64Array,
+  watchRows: Float64Array,
+  watchFeed: Float64Array,
+  cacheU: Float64Array,
+  cacheXInf: Float64Array,
+  cacheA0: Float64Array,
+): void {
+  for (let j = 0; j < q; j++) cacheU[slot * q + j] = inputs[row + j];
+  for (let k = 0; k < n; k++) {
+    let v = 0;
+    for (let j = 0; j < q; j++) v += F[k * q + j] * inputs[row + j];
+    cacheXInf[slot * n + k] = v;
+  }
   for (let w = 0; w < nw; w++) {
-    // A profile of zero total length: the only instant is the start.
-    if (peakValue[w] === -Infinity) peaks.push({ valueC: initial[watch[w]], timeS: 0 });
-    else peaks.push({ valueC: peakValue[w], timeS: peakTime[w] });
+    let v = 0;
+    for (let k = 0; k < n; k++) v += watchRows[w * n + k] * cacheXInf[slot * n + k];
+    for (let j = 0; j < q; j++) v += watchFeed[w * q + j] * inputs[row + j];
+    cacheA0[slot * nw + w] = v;
   }
-  const result: RunResult = { peaks, final: temperaturesFromModal(model, x, u), initial };
-  if (boundaries) {
-    result.boundaries = boundaries;
-    result.boundaryTimes = boundaryTimes;
-  }
-  return result;
+}
+
+function toFloat64(values: ArrayLike<number>): Float64Array {
+  return values instanceof Float64Array ? values : Float64Array.from(values);
 }
 
 function checkProfile(profile: Profile, q: number): { durations: ArrayLike<number>; inputs: ArrayLike<number> } {

@@ -58,6 +58,8 @@ export type ModalModel = {
   readonly inputCount: number;
   /** n, number of modes = number of nodes with a heat capacity. */
   readonly modeCount: number;
+  /** 1 where the node is massless (its temperature follows the inputs instantly). */
+  readonly massless: Uint8Array;
   /** Modal decay rates λ (1/s), ascending, all > 0. Time constants are 1/λ. */
   readonly rates: Float64Array;
   readonly outputFromModes: Float64Array;
