@@ -5,6 +5,7 @@ import { invitationsRouter } from './invitations';
 import { outboxRouter } from './outbox';
 import { passwordResetsRouter } from './password-resets';
 import { sessionRouter } from './session';
+import { solveRouter } from './solve';
 import { studiesRouter } from './studies';
 import { teamsRouter } from './teams';
 
@@ -22,6 +23,7 @@ export function apiRouter(deps: Deps) {
   api.use('/invitations', invitationsRouter(deps));
   api.use('/teams', teamsRouter(deps));
   api.use('/studies', studiesRouter(deps));
+  api.use('/solve', solveRouter(deps));
   api.use('/outbox', outboxRouter(deps));
 
   return api;

@@ -2,11 +2,13 @@ import { Router, type NextFunction, type Request, type Response } from 'express'
 import * as yup from 'yup';
 import { commentSchema, reviewSchema, studyCreateSchema, studySaveSchema } from '../../src/validation/studies';
 import type { Deps } from '../deps';
+import { AppError } from '../errors';
 import { authOf, requireAuth } from '../middleware/auth';
 import type { Study } from '../models';
 import { addComment, deleteComment, listComments } from '../services/comments-service';
 import { listReviews, reviewStudy, submitForReview } from '../services/review-service';
 import { listRevisions, restoreRevision, revisionView } from '../services/revisions-service';
+import { solveDocument } from '../services/study-document';
 import { createStudy, deleteStudy, duplicateStudy, findStudy, listStudies, saveStudy, studyView } from '../services/studies-service';
 import { validateBody } from '../validate';
 import { idParam } from './params';
@@ -49,6 +51,12 @@ export function studiesRouter(deps: Deps) {
   router.post('/:id/duplicate', load, async (_req, res) => {
     const study = await duplicateStudy(db, authOf(res), studyOf(res));
     res.status(201).location(`/api/studies/${study.id}`).json({ study });
+  });
+
+  router.get('/:id/result', load, (_req, res) => {
+    const study = studyOf(res);
+    if (!study.document) throw new AppError(409, 'no_document', 'This study has no study document to solve yet');
+    res.json({ version: study.version, result: solveDocument(study.document) });
   });
 
   // Review

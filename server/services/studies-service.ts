@@ -6,6 +6,7 @@ import type { Role, Study } from '../models';
 import { recordEvent } from './audit-service';
 import type { MembershipView, SessionView } from './auth-service';
 import { requireStudyEditor } from './permissions';
+import { checkDocument } from './study-document';
 
 export const EDITOR_ROLES: readonly Role[] = ['owner', 'designer'];
 
@@ -114,6 +115,7 @@ export async function insertStudy(db: Db, s: NewStudy, transaction: Transaction)
 
 export async function createStudy(db: Db, auth: SessionView, input: StudyCreateInput): Promise<StudyView> {
   const team = teamForNewStudy(auth.memberships, input.teamId);
+  if (input.document) checkDocument(input.document);
   const id = await db.sequelize.transaction(async (transaction) => {
     const study = await insertStudy(
       db,
@@ -144,6 +146,7 @@ export async function saveStudy(db: Db, auth: SessionView, study: Study, input: 
       current: await studyView(db, await findStudy(db, auth.memberships, study.id)),
     });
   if (input.baseVersion !== study.version) throw await conflict();
+  if (input.document) checkDocument(input.document);
 
   const next = {
     title: input.title ?? study.title,

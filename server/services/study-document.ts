@@ -1,0 +1,32 @@
+import { evaluateStudy, parseStudy, type StudyDocument, type StudyResult } from '../../src/core/study';
+import { AppError } from '../errors';
+
+/** The core's parser names the field as "path: reason"; the API reports it under `document.`. */
+function toBadRequest(err: Error, prefix: string): AppError {
+  const cut = err.message.indexOf(': ');
+  const path = cut > 0 ? err.message.slice(0, cut) : 'study';
+  const reason = cut > 0 ? err.message.slice(cut + 2) : err.message;
+  const full = path === 'study' ? prefix : `${prefix}.${path}`;
+  return AppError.badRequest(`${full}: ${reason}`, [{ path: full, message: reason }]);
+}
+
+/** Checks a study document with the core's parser; a bad one answers 400 naming its field. */
+export function checkDocument(document: unknown, prefix = 'document'): StudyDocument {
+  try {
+    return parseStudy(document);
+  } catch (err) {
+    if (err instanceof RangeError || err instanceof TypeError) throw toBadRequest(err, prefix);
+    throw err;
+  }
+}
+
+/** Parses and solves; solver refusals (too large, no path to ambient) are the client's 400 too. */
+export function solveDocument(document: unknown, options: { seriesPoints?: number } = {}): StudyResult {
+  const doc = checkDocument(document);
+  try {
+    return evaluateStudy(doc, { seriesPoints: options.seriesPoints });
+  } catch (err) {
+    if (err instanceof RangeError || err instanceof TypeError) throw toBadRequest(err, 'document');
+    throw err;
+  }
+}
