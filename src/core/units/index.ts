@@ -1,0 +1,2 @@
+export { parseQuantity, formatQuantity, UNITS } from './quantities';
+export type { ParsedQuantity, UnitKind, UnitSpec } from './quantities';
