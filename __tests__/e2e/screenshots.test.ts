@@ -43,7 +43,7 @@ describe.each([
     expectPng(await screenshot(page, viewport, 'studies'));
 
     await page.getByText(demo[0].title, { exact: true }).first().click();
-    await page.getByRole('heading', { name: 'Design document' }).waitFor();
+    await page.getByRole('heading', { name: 'Design inputs' }).waitFor();
     expect(new URL(page.url()).pathname).toBe(`/studies/${demo[0].id}`);
     expect(await page.getByText(/Results are estimates from datasheet values/).count()).toBe(1);
     expectPng(await screenshot(page, viewport, 'study'));

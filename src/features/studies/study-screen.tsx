@@ -6,7 +6,7 @@ import { spacing } from '@/constants/theme';
 
 import { useStudy } from './api';
 import { BackLink } from './components/back-link';
-import { DocumentSummary } from './components/document-summary';
+import { StudyInputs } from './components/study-inputs';
 import { EstimateCaution } from './components/estimate-caution';
 import { StatusBadge } from './components/status-badge';
 import { StudyFacts } from './components/study-facts';
@@ -45,12 +45,12 @@ export function StudyScreen({ id }: StudyScreenProps) {
           <StatusBadge status={data.status} />
           <Text variant={wide ? 'display' : 'title'}>{data.title}</Text>
         </View>
-        <StudyFacts study={data} wide={wide} />
+        <StudyFacts study={data} />
         <Card>
           <Text variant="heading">Description</Text>
           <Text tone={data.description ? 'default' : 'muted'}>{data.description || 'No description.'}</Text>
         </Card>
-        <DocumentSummary document={data.document} />
+        <StudyInputs document={data.document} />
         <EstimateCaution />
       </>
     );

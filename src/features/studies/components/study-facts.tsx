@@ -1,38 +1,18 @@
-import { StyleSheet, View } from 'react-native';
-
-import { Text } from '@/components/ui';
-import { spacing } from '@/constants/theme';
-
+import type { Fact } from '../document-facts';
 import { formatDateTime } from '../format';
 import type { StudySummary } from '../types';
+import { FactGrid } from './fact-grid';
 
-export type StudyFactsProps = { study: StudySummary; wide: boolean };
+export type StudyFactsProps = { study: StudySummary };
 
-export function StudyFacts({ study, wide }: StudyFactsProps) {
-  const facts = [
+/** Who owns the study and when it last changed. */
+export function StudyFacts({ study }: StudyFactsProps) {
+  const facts: Fact[] = [
     { label: 'Team', value: study.teamName },
     { label: 'Author', value: study.author.name },
     { label: 'Revision', value: `v${study.version}` },
     { label: 'Created', value: formatDateTime(study.createdAt) },
     { label: 'Updated', value: formatDateTime(study.updatedAt) },
   ];
-  return (
-    <View style={[styles.grid, wide && styles.gridWide]}>
-      {facts.map((fact) => (
-        <View key={fact.label} style={[styles.fact, wide && styles.factWide]}>
-          <Text variant="caption" tone="faint">
-            {fact.label}
-          </Text>
-          <Text variant="body">{fact.value}</Text>
-        </View>
-      ))}
-    </View>
-  );
+  return <FactGrid facts={facts} />;
 }
-
-const styles = StyleSheet.create({
-  grid: { flexDirection: 'row', flexWrap: 'wrap', rowGap: spacing.md, columnGap: spacing.xl },
-  gridWide: { columnGap: spacing.xxl },
-  fact: { minWidth: 130, gap: spacing.xxs },
-  factWide: { minWidth: 150 },
-});
