@@ -97,7 +97,7 @@ describe('runProfile peaks', () => {
     const watch = [0, 3, 6, 7];
     const run = runProfile(model, { durations, inputs }, { initial, watchNodes: watch });
     // Reference: segment by segment with peakInSegment (full root isolation, no bounds).
-    let T = Float64Array.from(initial);
+    let T: Float64Array = Float64Array.from(initial);
     const best = watch.map(() => ({ valueC: -Infinity, timeS: 0 }));
     let t = 0;
     for (let s = 0; s < S; s++) {
@@ -126,7 +126,7 @@ describe('runProfile peaks', () => {
     const initial = [30, 30, 30, 95, 90, 85, 60, 40];
     const run = runProfile(model, { durations, inputs }, { initial, watchNodes: [0, 3] });
     // Reference: 2,000 exact samples per segment.
-    let T = Float64Array.from(initial);
+    let T: Float64Array = Float64Array.from(initial);
     const sampled = [-Infinity, -Infinity];
     for (let s = 0; s < S; s++) {
       const u = inputs.subarray(s * 3, s * 3 + 3);

@@ -24,7 +24,7 @@ describe('single RC', () => {
 
   it('chained segments equal one segment of the summed length', () => {
     const once = advance(model, [Ta], [P, Ta], 0.7 * tau);
-    let T = Float64Array.of(Ta);
+    let T: Float64Array = Float64Array.of(Ta);
     for (let i = 0; i < 7; i++) T = advance(model, T, [P, Ta], 0.1 * tau, T);
     // Same textbook formula at t = 0.7 τ; a time-stepping scheme would drift.
     assertInRelDelta(T[0], Ta + P * R * (1 - Math.exp(-0.7)), 1e-13, 'chained');
@@ -77,7 +77,7 @@ describe('single RC', () => {
     const trip = 65;
     const resume = 55;
     const Tinf = Ta + P * R;
-    let T = Float64Array.of(Ta);
+    let T: Float64Array = Float64Array.of(Ta);
     const onTimes: number[] = [];
     const offTimes: number[] = [];
     for (let cycle = 0; cycle < 4; cycle++) {
