@@ -42,7 +42,7 @@ export function SignUpScreen() {
 
   return (
     <AuthFrame title="Create an account">
-      <Text tone="muted">You start a new team and become its owner. You can invite designers and reviewers later.</Text>
+      <Text tone="muted">You start a new team and become its owner.</Text>
       <View style={styles.fields}>
         <TextField
           label="Your name"
