@@ -1,7 +1,7 @@
 import { advance, runProfile } from '../thermal';
 import type { StudyModel } from './study-model';
 import type { EventLog } from './event-log';
-import { notePower, offerPeak, recordRow, sampleState, timeAtOrAbove, type Observer } from './observer';
+import { notePower, observeStretch, offerPeak, recordRow, sampleState, timeAtOrAbove, type Observer } from './observer';
 import { fedDevices, segmentPower, type SegmentPower } from './segment-power';
 import { logDriveEvents } from './drive-events';
 
@@ -12,6 +12,8 @@ import { logDriveEvents } from './drive-events';
  */
 /** Pieces per runProfile call at most, so the buffers stay small on long profiles. */
 const MAX_CHUNK = 65536;
+/** Chunks with fewer pieces are stepped one by one (same exact answer, less set-up). */
+const MIN_BATCH = 48;
 
 export type BatchRunner = {
   T: Float64Array;
@@ -96,6 +98,7 @@ export function createBatchRunner(sm: StudyModel, observer: Observer | null, eve
 
   function flush(): void {
     if (count === 0) return;
+    if (count < MIN_BATCH && observer) return stepChunk(observer);
     start.set(T);
     const obs = observer;
     const t0 = times[0];
@@ -122,6 +125,16 @@ export function createBatchRunner(sm: StudyModel, observer: Observer | null, eve
       timeAboveTarget(obs, result.peaks.map((p) => p.valueC));
     }
     T.set(result.final);
+    count = 0;
+  }
+
+  /** A sparse chunk: runProfile's set-up would cost more than stepping its few pieces exactly. */
+  function stepChunk(obs: Observer): void {
+    for (let k = 0; k < count; k++) {
+      const u = inputs.subarray(k * q, (k + 1) * q);
+      observeStretch(obs, sm, model, T, u, times[k], durations[k], inputs[k * q + m], scratch);
+      advance(model, T, u, durations[k], T);
+    }
     count = 0;
   }
 

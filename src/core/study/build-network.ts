@@ -1,4 +1,4 @@
-import { AMBIENT, cauerNetwork, fosterToCauer, type CauerStage, type LinkSpec, type NetworkSpec, type NodeSpec } from '../thermal';
+import { AMBIENT, fosterToCauer, type CauerStage, type LinkSpec, type NetworkSpec, type NodeSpec } from '../thermal';
 import type { Device, PackageModel, StudyDocument } from './types';
 
 /** Node ids of the study network; charts and CSV columns are named after them. */
@@ -21,12 +21,13 @@ function deviceChain(device: Device, stages: CauerStage[], sinkNode: string): { 
   const n = device.count;
   const scaled = stages.map((s) => ({ rKPerW: s.rKPerW / n, capacityJPerK: s.capacityJPerK * n }));
   const caseId = caseNodeId(device.id);
-  const ladder = cauerNetwork(scaled, `${device.id}.stage`, caseId);
-  return {
-    nodes: [...ladder.nodes, { id: caseId, capacityJPerK: 0 }],
-    links: [...ladder.links, { a: caseId, b: sinkNode, rKPerW: device.interfaceRthKPerW / n }],
-    junction: ladder.junctionId,
-  };
+  // Built here rather than with cauerNetwork, which refuses massless stages (a lumped Rθjc has none).
+  const ids = scaled.map((_, k) => `${device.id}.stage${k + 1}`);
+  const nodes: NodeSpec[] = scaled.map((s, k) => ({ id: ids[k], capacityJPerK: s.capacityJPerK }));
+  const links: LinkSpec[] = scaled.map((s, k) => ({ a: ids[k], b: k + 1 < ids.length ? ids[k + 1] : caseId, rKPerW: s.rKPerW }));
+  nodes.push({ id: caseId, capacityJPerK: 0 });
+  links.push({ a: caseId, b: sinkNode, rKPerW: device.interfaceRthKPerW / n });
+  return { nodes, links, junction: ids[0] };
 }
 
 export type StudyNetwork = {

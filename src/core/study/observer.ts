@@ -134,22 +134,20 @@ export function timeAtOrAbove(model: ModalModel, T: Float64Array, u: ArrayLike<n
 
 /**
  * Observes one constant-input stretch [t, t + h] from state T: sample at its start, exact
- * peaks of every watched node (interior ones included), time above target, power.
+ * peaks of every watched node (interior ones included), time above target.
  */
 export function observeStretch(
   obs: Observer,
   sm: StudyModel,
   model: ModalModel,
   T: Float64Array,
-  u: Float64Array,
-  partPowerW: ArrayLike<number>,
+  u: ArrayLike<number>,
   t: number,
   h: number,
   ambientC: number,
   scratch: Float64Array,
 ): void {
   sampleState(obs, t, T, ambientC);
-  notePower(obs, partPowerW, h);
   if (h === 0) return;
   const { nodes } = obs;
   for (let w = 0; w < nodes.length; w++) {

@@ -2,7 +2,7 @@ import { advance, firstCrossing, type ModalModel } from '../thermal';
 import { shutdownWatch } from '../electrical';
 import type { StudyModel } from './study-model';
 import type { EventLog } from './event-log';
-import { observeStretch, sampleState, type Observer } from './observer';
+import { notePower, observeStretch, sampleState, type Observer } from './observer';
 import { fedDevices, segmentPower, type SegmentPower } from './segment-power';
 import { logDriveEvents } from './drive-events';
 import { MAX_SOLVED_PIECES } from './constants';
@@ -112,7 +112,10 @@ export function createStepper(sm: StudyModel, observer: Observer | null, events:
       if (++self.stretches > MAX_SOLVED_PIECES) {
         throw new RangeError(`profile: solving needs more than ${MAX_SOLVED_PIECES.toLocaleString('en')} stretches (thermal shutdown cycling too fast?); shorten the profile`);
       }
-      if (observer) observeStretch(observer, sm, model, T, u, p.partPowerW, t, step, ambientC, scratch);
+      if (observer) {
+        observeStretch(observer, sm, model, T, u, t, step, ambientC, scratch);
+        notePower(observer, p.partPowerW, step);
+      }
       if (events) {
         const drive = doc.profile.segments[segmentIndex].electrical;
         if (drive) logDriveEvents(doc, events, p, drive.vinV, drive.voutV, drive.iloadA, t, step);
