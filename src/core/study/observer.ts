@@ -90,6 +90,8 @@ export function offerPeak(obs: Observer, w: number, t: number, valueC: number, a
     const row = new Float64Array(obs.nodes.length + 2);
     row[0] = t;
     obs.nodes.forEach((node, k) => (row[1 + k] = T[node]));
+    // The exact peak, not the state recomputed at its time, which can differ in the last digits.
+    row[1 + w] = valueC;
     row[obs.nodes.length + 1] = ambientC;
     obs.peakRows[w] = row;
   }
