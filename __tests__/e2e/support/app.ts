@@ -55,6 +55,8 @@ const SCREENSHOT_DIR = path.resolve(__dirname, '..', '..', '..', 'artifacts', 's
 export async function screenshot(page: Page, viewport: Viewport, name: string): Promise<string> {
   fs.mkdirSync(SCREENSHOT_DIR, { recursive: true });
   const file = path.join(SCREENSHOT_DIR, `${viewport.width}x${viewport.height}-${name}.png`);
+  // Park the pointer so no hover highlight lands in the picture.
+  await page.mouse.move(0, 0);
   await page.screenshot({ path: file, fullPage: true });
   return file;
 }

@@ -7,6 +7,9 @@ import { formatDate } from '../format';
 import type { StudySummary } from '../types';
 import { StatusBadge } from './status-badge';
 
+// Keeps the date on one line when the meta line wraps.
+const NBSP = '\u00a0';
+
 export type StudyCardProps = { study: StudySummary };
 
 export function StudyCard({ study }: StudyCardProps) {
@@ -30,7 +33,7 @@ export function StudyCard({ study }: StudyCardProps) {
         </Text>
       ) : null}
       <Text variant="caption" tone="faint">
-        {study.author.name} · {study.teamName} · updated {formatDate(study.updatedAt)}
+        {study.author.name} · {study.teamName} · updated {formatDate(study.updatedAt).replace(/ /g, NBSP)}
       </Text>
     </PressableLink>
   );
@@ -45,6 +48,6 @@ const styles = StyleSheet.create({
     borderColor: color.border,
     backgroundColor: color.surface,
   },
-  active: { borderColor: color.borderStrong, backgroundColor: color.surfaceMuted },
+  active: { borderColor: color.accent },
   head: { flexDirection: 'row', justifyContent: 'space-between', alignItems: 'center' },
 });
