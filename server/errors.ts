@@ -33,7 +33,8 @@ export class AppError extends Error {
 
 export function fromYup(err: YupValidationError): AppError {
   const inner = err.inner.length > 0 ? err.inner : [err];
-  const details = inner.map((e) => ({ path: e.path || '(body)', message: e.message }));
+  const seen = new Set<string>();
+  const details = inner.map((e) => ({ path: e.path || '(body)', message: e.message })).filter((d) => !seen.has(d.path) && seen.add(d.path));
   const message = details.map((d) => `${d.path}: ${d.message}`).join('; ');
   return AppError.badRequest(message, details);
 }

@@ -1,6 +1,8 @@
 import type { Sequelize } from 'sequelize';
 import { AuditEvent } from './audit-event';
 import { Comment } from './comment';
+import { Heatsink } from './heatsink';
+import { InterfaceMaterial } from './interface-material';
 import { Invitation } from './invitation';
 import { MailMessage } from './mail-message';
 import { Membership } from './membership';
@@ -11,7 +13,7 @@ import { Study } from './study';
 import { Team } from './team';
 import { User } from './user';
 
-const ALL = { User, Team, Membership, Study, Revision, Review, Comment, Invitation, PasswordReset, MailMessage, AuditEvent };
+const ALL = { User, Team, Membership, Study, Revision, Review, Comment, Invitation, PasswordReset, MailMessage, AuditEvent, Heatsink, InterfaceMaterial };
 export type Models = typeof ALL;
 
 const fk = (name: string, field: string, allowNull = false) => ({ foreignKey: { name, field, allowNull } });
@@ -41,11 +43,13 @@ export function initModels(sequelize: Sequelize): Models {
   PasswordReset.belongsTo(User, { ...fk('userId', 'user_id'), as: 'user' });
   Team.hasMany(AuditEvent, { ...fk('teamId', 'team_id'), as: 'auditEvents' });
   AuditEvent.belongsTo(User, { ...fk('actorId', 'actor_id', true), as: 'actor' });
+  Team.hasMany(Heatsink, { ...fk('teamId', 'team_id'), as: 'heatsinks' });
+  Team.hasMany(InterfaceMaterial, { ...fk('teamId', 'team_id'), as: 'interfaceMaterials' });
 
   return ALL;
 }
 
-export { AuditEvent, Comment, Invitation, MailMessage, Membership, PasswordReset, Review, Revision, Study, Team, User };
+export { AuditEvent, Comment, Heatsink, InterfaceMaterial, Invitation, MailMessage, Membership, PasswordReset, Review, Revision, Study, Team, User };
 export type { Role } from './membership';
 export type { CommentAnchor } from './comment';
 export type { ReviewDecision } from './review';

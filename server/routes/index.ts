@@ -1,6 +1,9 @@
 import express, { Router } from 'express';
 import type { Deps } from '../deps';
+import { heatsinks } from '../services/heatsinks';
+import { interfaceMaterials } from '../services/interface-materials';
 import { accountsRouter } from './accounts';
+import { catalogueRouter } from './catalogue';
 import { invitationsRouter } from './invitations';
 import { outboxRouter } from './outbox';
 import { passwordResetsRouter } from './password-resets';
@@ -23,6 +26,8 @@ export function apiRouter(deps: Deps) {
   api.use('/invitations', invitationsRouter(deps));
   api.use('/teams', teamsRouter(deps));
   api.use('/studies', studiesRouter(deps));
+  api.use('/heatsinks', catalogueRouter(deps, heatsinks as never, 'heatsinks.csv'));
+  api.use('/interface-materials', catalogueRouter(deps, interfaceMaterials as never, 'interface-materials.csv'));
   api.use('/solve', solveRouter(deps));
   api.use('/outbox', outboxRouter(deps));
 

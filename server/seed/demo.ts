@@ -4,6 +4,7 @@ import type { Db } from '../db';
 import type { Role } from '../models';
 import { hashPassword } from '../services/auth-service';
 import { insertStudy } from '../services/studies-service';
+import { seedDemoCatalogue } from './demo-catalogue';
 
 /** Invented demo data: printed in the README and by the server at start-up. */
 export const DEMO_PASSWORD = 'junctura-demo';
@@ -43,6 +44,7 @@ export async function seedDemo(db: Db, bcryptCost: number): Promise<boolean> {
       await db.models.Membership.create({ userId: user.id, teamId: team.id, role: account.role }, { transaction });
       users.push(user);
     }
+    await seedDemoCatalogue(db, team.id, transaction);
     const designer = users[1];
     for (const doc of docs) {
       await insertStudy(db, { teamId: team.id, authorId: designer.id, title: doc.title, description: doc.description ?? '', document: doc }, transaction);

@@ -1,3 +1,4 @@
 export * from './auth';
 export * from './studies';
 export * from './team';
+export * from './catalogues';

@@ -16,6 +16,7 @@ describe('parseQuantity', () => {
     expect(value('47 µF', 'capacitance')).toBeCloseTo(47e-6, 15);
     expect(value('50 mΩ', 'resistance')).toBeCloseTo(0.05, 12);
     expect(value('2.2 kohm', 'resistance')).toBeCloseTo(2200, 9);
+    expect(value('5 cm', 'length')).toBeCloseTo(0.05, 12);
   });
 
   it('takes a bare number in the field unit, and grams as the mass unit', () => {

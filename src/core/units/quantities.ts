@@ -1,10 +1,10 @@
 /**
  * Engineering quantities typed by people: "2.5 A", "500mA", "1.2 kW", "35 ms", "0.8 K/W".
  * Values come back in SI units. Prefixes are the SI ones (BIPM, The International System of
- * Units, 9th edition, Table 7) from pico to giga; "u" stands in for µ.
+ * Units, 9th edition, Table 7) from pico to giga, with centi for lengths; "u" stands in for µ.
  */
 
-const PREFIXES: Record<string, number> = { p: 1e-12, n: 1e-9, u: 1e-6, µ: 1e-6, μ: 1e-6, m: 1e-3, '': 1, k: 1e3, M: 1e6, G: 1e9 };
+const PREFIXES: Record<string, number> = { p: 1e-12, n: 1e-9, u: 1e-6, µ: 1e-6, μ: 1e-6, m: 1e-3, c: 1e-2, '': 1, k: 1e3, M: 1e6, G: 1e9 };
 
 /** A physical unit as accepted in a field: its symbol, aliases, and the factor to SI. */
 export type UnitSpec = { symbol: string; aliases?: string[]; toSi?: number; prefixes?: boolean };
