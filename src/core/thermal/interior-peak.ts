@@ -3,7 +3,7 @@ import { addTerm, type ExpSumWorkspace, isolateRoots, refine, resetSum, shifted 
 
 /**
  * Largest interior maximum of f(τ) = a_0 + Σ a_k e^(−λ_k τ) on (0, h), with
- * a_k = w_k (x_k − x∞_k) (w the node's row of W at offset `base`, x∞ at offset `xb`). Writes [value, τ] to out
+ * a_k = w_k d_k (w the node's row of W at offset `base`, d = x − x∞ at the segment start). Writes [value, τ] to out
  * and returns true when there is one; false when f has no interior maximum.
  *
  * f′ = Σ c_k e^(−λ_k τ), c_k = −λ_k a_k, has at most as many zeros as its coefficients
@@ -21,17 +21,15 @@ export function interiorPeak(
   db: number,
   w: Float64Array,
   base: number,
-  x: Float64Array,
-  xInf: Float64Array,
-  xb: number,
+  dev: Float64Array,
   a0: number,
   h: number,
   out: Float64Array,
 ): boolean {
   const n = rates.length;
-  if (monotone(rates, clusters, decay, gap, db, w, base, x, xInf, xb)) return false;
+  if (monotone(rates, clusters, decay, gap, db, w, base, dev)) return false;
   resetSum(ws);
-  for (let k = 0; k < n; k++) addTerm(ws, -rates[k] * w[base + k] * (x[k] - xInf[xb + k]), rates[k]);
+  for (let k = 0; k < n; k++) addTerm(ws, -rates[k] * w[base + k] * dev[k], rates[k]);
   let changes = 0;
   for (let k = 1; k < ws.count; k++) if (ws.coef[k] > 0 !== ws.coef[k - 1] > 0) changes++;
   if (changes === 0) return false;
@@ -40,7 +38,7 @@ export function interiorPeak(
     const dh = shifted(ws.coef, ws.rate, 0, ws.count, h);
     if (!(d0 > 0 && dh < 0)) return false;
     const t = refine(ws.coef, ws.rate, 0, ws.count, 0, h, d0, h);
-    out[0] = valueAt(rates, w, base, x, xInf, xb, a0, t);
+    out[0] = valueAt(rates, w, base, dev, a0, t);
     out[1] = t;
     return true;
   }
@@ -48,7 +46,7 @@ export function interiorPeak(
   let found = false;
   for (let r = 0; r < count; r++) {
     const t = ws.roots[r];
-    const v = valueAt(rates, w, base, x, xInf, xb, a0, t);
+    const v = valueAt(rates, w, base, dev, a0, t);
     if (!found || v > out[0]) {
       out[0] = v;
       out[1] = t;
@@ -62,14 +60,12 @@ function valueAt(
   rates: Float64Array,
   w: Float64Array,
   base: number,
-  x: Float64Array,
-  xInf: Float64Array,
-  xb: number,
+  dev: Float64Array,
   a0: number,
   t: number,
 ): number {
   let v = a0;
-  for (let k = 0; k < rates.length; k++) v += w[base + k] * (x[k] - xInf[xb + k]) * Math.exp(-rates[k] * t);
+  for (let k = 0; k < rates.length; k++) v += w[base + k] * dev[k] * Math.exp(-rates[k] * t);
   return v;
 }
 
@@ -82,16 +78,14 @@ function monotone(
   db: number,
   w: Float64Array,
   base: number,
-  x: Float64Array,
-  xInf: Float64Array,
-  xb: number,
+  dev: Float64Array,
 ): boolean {
   let low = 0;
   let high = 0;
   let slack = 0;
   let cluster = 0;
   for (let k = 0; k < rates.length; k++) {
-    const c = -rates[k] * w[base + k] * (x[k] - xInf[xb + k]);
+    const c = -rates[k] * w[base + k] * dev[k];
     cluster += c;
     slack += Math.abs(c) * gap[db + k];
     if (clusters.last[k] === 1) {

@@ -12,9 +12,10 @@ import type { ModalModel, Peak, Profile, RunOptions, RunResult } from './types';
  *
  * Per segment and mode: the update x ← x∞ + e^(−λh)(x − x∞); x∞ = F u and e^(−λh) come
  * from a small cache of recent inputs and durations (PROFILE_CACHE_SIZE), so repeating
- * patterns cost no exp. Per watched node, an upper bound of f on [0, h] (each cluster of
- * near-equal rates through its slowest one, see clusterModes) skips segments that cannot
- * raise the peak; the exact interior search (interiorPeak) runs only when one could. Memory is fixed unless recordBoundaries is set.
+ * patterns cost no exp. Per watched node, cheap upper bounds of f on [0, h] (termwise
+ * first, then each cluster of near-equal rates through its slowest one, see clusterModes)
+ * skip segments that cannot raise the peak, and modal terms of one sign prove f monotone;
+ * the exact interior search (interiorPeak) runs only when a peak could hide inside. Memory is fixed unless recordBoundaries is set.
  *
  * Peaks are exact maxima over the whole profile (earliest time on a tie; s from its start).
  * Zero-length segments take no time and hold no peak. Bad durations or inputs throw
@@ -123,15 +124,22 @@ function runSegments(
 ): void {
   const n = rates.length;
   const nw = peakValue.length;
+  // Module bindings read through getters once compiled to CommonJS: keep locals.
   const C = PROFILE_CACHE_SIZE;
+  const tol = PEAK_SEARCH_ABS_TOL;
   const cacheU = new Float64Array(C * q).fill(NaN);
   const cacheXInf = new Float64Array(C * n);
   const cacheA0 = new Float64Array(C * nw);
   const cacheH = new Float64Array(C).fill(NaN);
   const cacheDecay = new Float64Array(C * n);
   const cacheGap = new Float64Array(C * n);
+  const gapReady = new Uint8Array(C);
   const { leader, last } = clusters;
   const found = new Float64Array(2);
+  const dev = new Float64Array(n);
+  const devEnd = new Float64Array(n);
+  const moveAbs = new Float64Array(n);
+  const watchAbs = watchRows.map(Math.abs);
   let nextU = 0;
   let nextH = 0;
   let slotU = -1;
@@ -169,32 +177,42 @@ function runSegments(
           nextH = (nextH + 1) % C;
           cacheH[slotH] = h;
           for (let k = 0; k < n; k++) cacheDecay[slotH * n + k] = Math.exp(-rates[k] * h);
-          clusterGaps(clusters, cacheDecay, slotH * n, h, cacheGap, slotH * n);
+          gapReady[slotH] = 0;
         }
       }
       const xb = slotU * n;
       const db = slotH * n;
+      // Shared by every watched node: d = x − x∞ at the start and at the end of the segment.
+      for (let k = 0; k < n; k++) {
+        const xi = cacheXInf[xb + k];
+        const d = x[k] - xi;
+        const de = d * cacheDecay[db + k];
+        dev[k] = d;
+        devEnd[k] = de;
+        moveAbs[k] = d > de ? d - de : de - d;
+        x[k] = xi + de;
+      }
       for (let w = 0; w < nw; w++) {
         const base = w * n;
         const a0 = cacheA0[slotU * nw + w];
-        let start = a0;
         let end = a0;
-        let bound = a0;
-        let cluster = 0;
+        let excess = 0;
         for (let k = 0; k < n; k++) {
-          const a = watchRows[base + k] * (x[k] - cacheXInf[xb + k]);
-          start += a;
-          end += a * cacheDecay[db + k];
-          cluster += a;
-          bound += (a < 0 ? -a : a) * cacheGap[db + k];
-          if (last[k] === 1) {
-            const ce = cluster * cacheDecay[db + leader[k]];
-            bound += cluster > ce ? cluster : ce;
-            cluster = 0;
-          }
+          end += watchRows[base + k] * devEnd[k];
+          excess += watchAbs[base + k] * moveAbs[k];
         }
+        // f(τ) − f(h) = Σ a_k (e^(−λτ) − e^(−λh)) ≤ Σ |w_k| |d_k| (1 − e^(−λ_k h)).
         let best = peakValue[w];
-        if (bound <= best + PEAK_SEARCH_ABS_TOL) continue;
+        if (end + excess <= best + tol) continue;
+        let start = a0;
+        let rising = true;
+        let falling = true;
+        for (let k = 0; k < n; k++) {
+          const a = watchRows[base + k] * dev[k];
+          start += a;
+          if (a > 0) rising = false;
+          else if (a < 0) falling = false;
+        }
         if (start > best) {
           best = start;
           peakTime[w] = t;
@@ -203,24 +221,53 @@ function runSegments(
           best = end;
           peakTime[w] = t + h;
         }
-        if (
-          bound > best + PEAK_SEARCH_ABS_TOL &&
-          interiorPeak(ws, rates, clusters, cacheDecay, cacheGap, db, watchRows, base, x, cacheXInf, xb, a0, h, found) &&
-          found[0] > best
-        ) {
-          best = found[0];
-          peakTime[w] = t + found[1];
+        // All a_k of one sign: f is monotone, its ends are its extremes.
+        if (!rising && !falling) {
+          if (gapReady[slotH] === 0) {
+            // Only segments that may peak inside need the cluster gaps of this duration.
+            clusterGaps(clusters, cacheDecay, db, h, cacheGap, db);
+            gapReady[slotH] = 1;
+          }
+        }
+        if (!rising && !falling && clusterBound(watchRows, base, dev, cacheDecay, cacheGap, db, leader, last, a0) > best + tol) {
+          if (interiorPeak(ws, rates, clusters, cacheDecay, cacheGap, db, watchRows, base, dev, a0, h, found) && found[0] > best) {
+            best = found[0];
+            peakTime[w] = t + found[1];
+          }
         }
         peakValue[w] = best;
-      }
-      for (let k = 0; k < n; k++) {
-        const xi = cacheXInf[xb + k];
-        x[k] = xi + cacheDecay[db + k] * (x[k] - xi);
       }
       t += h;
     }
     if (onBoundary !== null) onBoundary(s, t);
   }
+}
+
+/** Upper bound of f on [0, h], each cluster of near-equal rates through its slowest one. */
+function clusterBound(
+  watchRows: Float64Array,
+  base: number,
+  dev: Float64Array,
+  decay: Float64Array,
+  gap: Float64Array,
+  db: number,
+  leader: Int32Array,
+  last: Uint8Array,
+  a0: number,
+): number {
+  let bound = a0;
+  let cluster = 0;
+  for (let k = 0; k < dev.length; k++) {
+    const a = watchRows[base + k] * dev[k];
+    cluster += a;
+    bound += (a < 0 ? -a : a) * gap[db + k];
+    if (last[k] === 1) {
+      const ce = cluster * decay[db + leader[k]];
+      bound += cluster > ce ? cluster : ce;
+      cluster = 0;
+    }
+  }
+  return bound;
 }
 
 function sameRow(a: Float64Array, ia: number, b: Float64Array, ib: number, q: number): boolean {
