@@ -1,7 +1,7 @@
 import { advance, runProfile } from '../thermal';
 import type { StudyModel } from './study-model';
 import type { EventLog } from './event-log';
-import { notePower, observeStretch, offerPeak, recordRow, sampleState, timeAtOrAbove, type Observer } from './observer';
+import { boundsFor, notePower, observeStretch, offerPeak, recordRow, sampleState, timeAtOrAbove, type Observer } from './observer';
 import { fedDevices, segmentPower, type SegmentPower } from './segment-power';
 import { logDriveEvents } from './drive-events';
 
@@ -12,6 +12,8 @@ import { logDriveEvents } from './drive-events';
  */
 /** Pieces per runProfile call at most, so the buffers stay small on long profiles. */
 const MAX_CHUNK = 65536;
+/** Segments whose dissipation is kept for reuse (repeated passes and groups share indices). */
+const POWER_CACHE_SIZE = 4096;
 /** Chunks with fewer pieces are stepped one by one (same exact answer, less set-up). */
 const MIN_BATCH = 48;
 
@@ -46,6 +48,7 @@ export function createBatchRunner(sm: StudyModel, observer: Observer | null, eve
   function powerOf(segmentIndex: number): SegmentPower {
     let p = powerCache.get(segmentIndex);
     if (!p) {
+      if (powerCache.size >= POWER_CACHE_SIZE) powerCache.clear();
       const segment = doc.profile.segments[segmentIndex];
       p = segmentPower(doc, segment, fedDevices(doc, segment), allOn);
       powerCache.set(segmentIndex, p);
@@ -152,9 +155,13 @@ export function createBatchRunner(sm: StudyModel, observer: Observer | null, eve
       const w = 2 * d;
       if (!(peaks[w] >= obs.targetC[d])) continue;
       local.set(start);
+      const bounds = boundsFor(model);
       for (let k = 0; k < count; k++) {
         const u = inputs.subarray(k * q, (k + 1) * q);
-        obs.timeAboveS[d] += timeAtOrAbove(model, local, u, durations[k], obs.nodes[w], obs.targetC[d], scratch);
+        bounds.load(local, u, durations[k]);
+        if (bounds.upper(obs.nodes[w]) >= obs.targetC[d]) {
+          obs.timeAboveS[d] += timeAtOrAbove(model, local, u, durations[k], obs.nodes[w], obs.targetC[d], scratch);
+        }
         advance(model, local, u, durations[k], local);
       }
     }

@@ -117,8 +117,18 @@ export function readId(obj: Obj, key: string, path: string): string {
 
 const MAX_DEPTH = 64;
 
-/** Finds NaN or ±Infinity anywhere in the value (JavaScript callers can pass them; JSON cannot). */
+/** True when a NaN or ±Infinity sits anywhere in the value; cheap, builds no paths. */
+function hasNonFinite(value: unknown, depth: number): boolean {
+  if (typeof value === 'number') return !Number.isFinite(value);
+  if (typeof value !== 'object' || value === null) return false;
+  if (depth > MAX_DEPTH) return true;
+  for (const item of Array.isArray(value) ? value : Object.values(value)) if (hasNonFinite(item, depth + 1)) return true;
+  return false;
+}
+
+/** Path of the first NaN or ±Infinity in the value (JavaScript callers can pass them; JSON cannot). */
 export function findNonFinite(value: unknown, path = '', depth = 0): string | undefined {
+  if (depth === 0 && !hasNonFinite(value, 0)) return undefined;
   if (typeof value === 'number') return Number.isFinite(value) ? undefined : path;
   if (depth > MAX_DEPTH) typeFail(path, `is nested more than ${MAX_DEPTH} levels deep`);
   if (Array.isArray(value)) {

@@ -2,6 +2,7 @@ import { advance, firstCrossing, peakInSegment, type ModalModel } from '../therm
 import type { StudyModel } from './study-model';
 import { createSeriesRecorder, type SeriesRecorder } from './series-recorder';
 import { createBoundaryWriter, type BoundaryWriter } from './boundary-table';
+import { createStretchBounds, type StretchBounds } from './stretch-bounds';
 
 /** Chart and CSV names of the watched nodes, in watch order: junctions, cases, sinks, enclosure. */
 export function watchedNodes(sm: StudyModel): { keys: string[]; nodes: number[] } {
@@ -138,6 +139,18 @@ export function timeAtOrAbove(model: ModalModel, T: Float64Array, u: ArrayLike<n
  * Observes one constant-input stretch [t, t + h] from state T: sample at its start, exact
  * peaks of every watched node (interior ones included), time above target.
  */
+/** Bounds below the best value by less than this (K) still trigger the exact search, for round-off. */
+const BOUND_SLACK_K = 1e-9;
+
+const boundsCache = new WeakMap<ModalModel, StretchBounds>();
+
+/** Bounds of a stretch for this model (one workspace per compiled model). */
+export function boundsFor(model: ModalModel): StretchBounds {
+  let b = boundsCache.get(model);
+  if (!b) boundsCache.set(model, (b = createStretchBounds(model)));
+  return b;
+}
+
 export function observeStretch(
   obs: Observer,
   sm: StudyModel,
@@ -151,14 +164,21 @@ export function observeStretch(
 ): void {
   sampleState(obs, t, T, ambientC);
   if (h === 0) return;
-  const { nodes } = obs;
+  const { nodes, series } = obs;
+  const bounds = boundsFor(model);
+  bounds.load(T, u, h);
+  const devices = sm.doc.devices.length;
   for (let w = 0; w < nodes.length; w++) {
-    const pk = peakInSegment(model, T, u, h, nodes[w]);
-    offerPeak(obs, w, t + pk.timeS, pk.valueC, ambientC, () => advance(model, T, u, pk.timeS, scratch));
-    if (obs.series && pk.timeS > 0 && pk.timeS < h) obs.series.add(w, t + pk.timeS, pk.valueC);
-    if (w % 2 === 0 && w / 2 < sm.doc.devices.length) {
-      const d = w / 2;
-      if (pk.valueC >= obs.targetC[d]) obs.timeAboveS[d] += timeAtOrAbove(model, T, u, h, nodes[w], obs.targetC[d], scratch);
+    const upper = bounds.upper(nodes[w]) + BOUND_SLACK_K;
+    // The exact search runs only where it could raise the peak or the chart bucket's maximum.
+    if (upper > obs.peakC[w] || (series && upper > series.maxAt(w, t))) {
+      const pk = peakInSegment(model, T, u, h, nodes[w]);
+      offerPeak(obs, w, t + pk.timeS, pk.valueC, ambientC, () => advance(model, T, u, pk.timeS, scratch));
+      if (series && pk.timeS > 0 && pk.timeS < h) series.add(w, t + pk.timeS, pk.valueC);
+    }
+    // Junctions are the even watch slots of the first 2 × devices.
+    if (w % 2 === 0 && w < 2 * devices && upper >= obs.targetC[w / 2]) {
+      obs.timeAboveS[w / 2] += timeAtOrAbove(model, T, u, h, nodes[w], obs.targetC[w / 2], scratch);
     }
   }
 }

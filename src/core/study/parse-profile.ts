@@ -24,7 +24,7 @@ type Context = { devices: Map<string, Device>; out: ProfileSegment[] };
 function parsePower(value: unknown, path: string, ctx: Context): Record<string, number> {
   const obj = asObject(value, path);
   const power: Record<string, number> = {};
-  for (const [id, watts] of Object.entries(obj)) {
+  for (const id of Object.keys(obj)) {
     if (!ctx.devices.has(id)) rangeFail(fieldPath(path, id), `no device has the id ${JSON.stringify(id)}`);
     power[id] = readNumber(obj, id, path, { min: 0, unit: 'W' });
   }

@@ -1,14 +1,17 @@
 import { solveOperatingPoint, type OperatingPoint, type PassMember } from '../electrical';
 import type { Device, ProfileSegment, StudyDocument } from './types';
 
+const passDevices = new WeakMap<StudyDocument, number[]>();
+
 /** Which devices an electrical segment feeds: its `devices` list, else every device whose role is "pass". */
 export function fedDevices(doc: StudyDocument, segment: ProfileSegment): number[] {
   const ids = segment.electrical?.devices;
   if (ids) return ids.map((id) => doc.devices.findIndex((d) => d.id === id));
-  const out: number[] = [];
-  doc.devices.forEach((d, i) => {
-    if ((d.electrical?.role ?? 'pass') === 'pass') out.push(i);
-  });
+  let out = passDevices.get(doc);
+  if (!out) {
+    out = doc.devices.flatMap((d, i) => ((d.electrical?.role ?? 'pass') === 'pass' ? [i] : []));
+    passDevices.set(doc, out);
+  }
   return out;
 }
 

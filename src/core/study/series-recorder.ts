@@ -8,6 +8,8 @@ export type Series = { timeS: number[]; valueC: number[] };
  */
 export type SeriesRecorder = {
   add(node: number, t: number, value: number): void;
+  /** Highest value kept so far in the bucket holding time t (−Infinity when empty). */
+  maxAt(node: number, t: number): number;
   build(): Record<string, Series>;
 };
 
@@ -23,6 +25,8 @@ export function createSeriesRecorder(keys: readonly string[], bucketS: number, b
   const first = keys.map(() => ({ t: NaN, v: NaN }));
   const last = keys.map(() => ({ t: NaN, v: NaN }));
 
+  const bucketOf = (t: number) => Math.min(bucketCount - 1, Math.max(0, Math.floor(t / bucketS)));
+
   function add(node: number, t: number, value: number): void {
     if (Number.isNaN(first[node].t)) {
       first[node].t = t;
@@ -32,8 +36,7 @@ export function createSeriesRecorder(keys: readonly string[], bucketS: number, b
       last[node].t = t;
       last[node].v = value;
     }
-    const b = Math.min(bucketCount - 1, Math.max(0, Math.floor(t / bucketS)));
-    const k = node * bucketCount + b;
+    const k = node * bucketCount + bucketOf(t);
     if (value < minV[k]) {
       minV[k] = value;
       minT[k] = t;
@@ -69,5 +72,5 @@ export function createSeriesRecorder(keys: readonly string[], bucketS: number, b
     return out;
   }
 
-  return { add, build };
+  return { add, maxAt: (node, t) => maxV[node * bucketCount + bucketOf(t)], build };
 }

@@ -2,10 +2,13 @@ import { advance, firstCrossing, type ModalModel } from '../thermal';
 import { shutdownWatch } from '../electrical';
 import type { StudyModel } from './study-model';
 import type { EventLog } from './event-log';
-import { notePower, observeStretch, sampleState, type Observer } from './observer';
+import { boundsFor, notePower, observeStretch, sampleState, type Observer } from './observer';
 import { fedDevices, segmentPower, type SegmentPower } from './segment-power';
 import { logDriveEvents } from './drive-events';
 import { MAX_SOLVED_PIECES } from './constants';
+
+/** Round-off allowance of the stretch bounds, K. */
+const BOUND_MARGIN_K = 1e-9;
 
 /** Smallest stretch the convection check may cut a piece to, as a fraction of the piece. */
 const MIN_SPLIT_FRACTION = 1e-9;
@@ -44,7 +47,7 @@ export function createStepper(sm: StudyModel, observer: Observer | null, events:
   const fedCache = new Map<number, number[]>();
   let power: SegmentPower | null = null;
   let powerSegment = -1;
-  let powerKey = '';
+  const powerOn = on.slice();
   let suggested = Infinity;
 
   const rsaLow = new Float64Array(doc.sinks.length).fill(Infinity);
@@ -60,14 +63,13 @@ export function createStepper(sm: StudyModel, observer: Observer | null, events:
   }
 
   function updatePower(segmentIndex: number): SegmentPower {
-    const key = on.map((v) => (v ? '1' : '0')).join('');
-    if (power && powerSegment === segmentIndex && powerKey === key) return power;
+    if (power && powerSegment === segmentIndex && on.every((v, i) => v === powerOn[i])) return power;
     const segment = doc.profile.segments[segmentIndex];
     let fed = fedCache.get(segmentIndex);
     if (!fed) fedCache.set(segmentIndex, (fed = fedDevices(doc, segment)));
     power = segmentPower(doc, segment, fed, on);
     powerSegment = segmentIndex;
-    powerKey = key;
+    on.forEach((v, i) => (powerOn[i] = v));
     for (let d = 0; d < m; d++) u[d] = power.partPowerW[d] * doc.devices[d].count;
     return power;
   }
@@ -100,8 +102,13 @@ export function createStepper(sm: StudyModel, observer: Observer | null, events:
       }
       let step = convectionStep(model, end - t, ambientC);
       let tripped: number[] = [];
+      const bounds = boundsFor(model);
+      if (shutdown.length > 0) bounds.load(T, u, step);
       for (const d of shutdown) {
         const watch = shutdownWatch(doc.devices[d].electrical!.thermalShutdown!, on[d]);
+        const j = sm.junction[d];
+        // Bounds rule most stretches out: Tj cannot reach the level anywhere in them.
+        if (watch.direction === 'up' ? bounds.upper(j) < watch.levelC - BOUND_MARGIN_K : bounds.lower(j) > watch.levelC + BOUND_MARGIN_K) continue;
         const tc = firstCrossing(model, T, u, step, sm.junction[d], watch.levelC, watch.direction);
         if (tc === null) continue;
         if (tc < step) {

@@ -1,0 +1,30 @@
+import { createStretchBounds } from '@/core/study/stretch-bounds';
+import { advance, compileNetwork, peakInSegment, AMBIENT } from '@/core/thermal';
+import { seededRandom } from '../../helpers/seeded-random';
+
+describe('stretch bounds', () => {
+  it('bound the exact temperature from above and below over random stretches of a random ladder', () => {
+    // Reference: the thermal core's exact peak search and dense sampling of its exact solution.
+    const rand = seededRandom(5);
+    const nodes = Array.from({ length: 6 }, (_, i) => ({ id: `n${i}`, capacityJPerK: i === 2 ? 0 : 0.01 + 10 * rand() }));
+    const links = nodes.map((n, i) => ({ a: n.id, b: i + 1 < nodes.length ? nodes[i + 1].id : AMBIENT, rKPerW: 0.05 + rand() }));
+    links.push({ a: 'n0', b: 'n3', rKPerW: 2 });
+    const model = compileNetwork({ nodes, links, heatInputs: ['n0', 'n4'] });
+    const bounds = createStretchBounds(model);
+    for (let trial = 0; trial < 50; trial++) {
+      const T = Float64Array.from(nodes, () => 20 + 100 * rand());
+      const u = [50 * rand(), 30 * rand(), 25];
+      const h = Math.pow(10, -3 + 5 * rand());
+      bounds.load(T, u, h);
+      for (let k = 0; k < nodes.length; k++) {
+        const peak = peakInSegment(model, T, u, h, k).valueC;
+        expect(bounds.upper(k)).toBeGreaterThanOrEqual(peak - 1e-9);
+        for (let s = 0; s <= 20; s++) {
+          const v = advance(model, T, u, (h * s) / 20)[k];
+          expect(bounds.lower(k)).toBeLessThanOrEqual(v + 1e-9);
+          expect(bounds.upper(k)).toBeGreaterThanOrEqual(v - 1e-9);
+        }
+      }
+    }
+  });
+});
