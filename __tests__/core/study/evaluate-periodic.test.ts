@@ -50,4 +50,15 @@ describe('evaluateStudy periodic steady state', () => {
       expect(r.solver.periodic!.iterations).toBeLessThan(10);
     }
   });
+
+  it('settles at once when no node holds heat: every node follows Ta + P·R', () => {
+    // Massless network: the temperature is the series sum at each instant (textbook), 25 + 28·5 = 165 °C.
+    const study = pulses(28, 5, 10);
+    study.devices[0].package.capacityJPerK = 0;
+    for (const forceEventDriven of [false, true]) {
+      const r = evaluateStudy(parseStudy(study), { forceEventDriven });
+      assertInDelta(r.devices.U1.peakJunctionC, 25 + 28 * R, 1e-9, `peak, event-driven ${forceEventDriven}`);
+      expect(r.solver.periodic).toMatchObject({ converged: true, iterations: 1 });
+    }
+  });
 });

@@ -67,7 +67,7 @@ export function evaluateStudy(doc: StudyDocument, options: EvaluateOptions = {})
   const runner = makeRunner(sm, batch, observer, events);
   runner.reset(T0, on0);
   const run = runPasses(doc, runner, ambient, doc.profile.repeat, bucketS, bucketCount);
-  if (periodic && batch) periodic.residualK = maxDifference(runner.T, T0);
+  if (periodic && batch) periodic.residualK = maxDifference(runner.T, T0, sm.dynamicNodes);
 
   return assembleResult({
     sm,

@@ -30,7 +30,8 @@ function startInput(doc: StudyDocument, ambient: AmbientIntervals, on: boolean[]
  * needs one period and the modal closed form (periodicCorrection). With events or a
  * non-linear sink the same step is iterated, falling back to plain period-by-period
  * repetition when it stops halving the change, until a period's start moves less than
- * PERIODIC_TOLERANCE_K with the same on/off states.
+ * PERIODIC_TOLERANCE_K with the same on/off states. Only nodes with a capacity count: the
+ * others jump with the inputs at the period boundary.
  */
 export function periodicStartState(sm: StudyModel, batch: boolean, ambient: AmbientIntervals, T0: Float64Array): PeriodicStart {
   const { doc } = sm;
@@ -43,7 +44,7 @@ export function periodicStartState(sm: StudyModel, batch: boolean, ambient: Ambi
   for (let iterations = 1; iterations <= MAX_PERIODIC_ITERATIONS; iterations++) {
     runner.reset(T, on);
     runPasses(doc, runner, ambient, 1, period, 1);
-    const change = maxDifference(runner.T, T);
+    const change = maxDifference(runner.T, T, sm.dynamicNodes);
     const sameStates = runner.on.every((v, i) => v === on[i]);
     if (change <= PERIODIC_TOLERANCE_K && sameStates) return { T, on, iterations, residualK: change, converged: true };
     if (change > residual / 2) accelerate = false;

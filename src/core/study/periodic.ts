@@ -19,9 +19,9 @@ export function periodicCorrection(model: ModalModel, T0: ArrayLike<number>, Ten
   return temperaturesFromModal(model, x, u0);
 }
 
-/** Largest |a − b| over the entries, K. */
-export function maxDifference(a: ArrayLike<number>, b: ArrayLike<number>): number {
+/** Largest |a − b| over the given entries, K. */
+export function maxDifference(a: ArrayLike<number>, b: ArrayLike<number>, entries: readonly number[]): number {
   let worst = 0;
-  for (let i = 0; i < a.length; i++) worst = Math.max(worst, Math.abs(a[i] - b[i]));
+  for (const i of entries) worst = Math.max(worst, Math.abs(a[i] - b[i]));
   return worst;
 }

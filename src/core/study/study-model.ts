@@ -22,6 +22,8 @@ export type StudyModel = {
   /** Index of the node each sink's Rθsa leads to; −1 for the ambient. */
   sinkTo: number[];
   enclosure: number;
+  /** Nodes with a heat capacity: the state of the network (massless nodes follow the inputs). */
+  dynamicNodes: number[];
   /** Sinks whose Rθsa depends on their rise. */
   nonLinearSinks: number[];
   tolerance: number;
@@ -93,6 +95,7 @@ export function createStudyModel(doc: StudyDocument, tolerance: number): StudyMo
     sink,
     sinkTo,
     enclosure: doc.enclosure ? index(ENCLOSURE_NODE_ID) : -1,
+    dynamicNodes: referenceSpec.nodes.flatMap((node, i) => (node.capacityJPerK > 0 ? [i] : [])),
     nonLinearSinks,
     tolerance,
     modelAt,
