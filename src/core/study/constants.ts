@@ -30,6 +30,8 @@ export const MAX_LISTED_EVENTS = 2000;
 /** Iterated periodic steady state (with events or non-linear sinks): stop when a period's start moves less than this. */
 export const PERIODIC_TOLERANCE_K = 1e-6;
 export const MAX_PERIODIC_ITERATIONS = 2000;
+/** …and stop iterating once the warm-up periods have solved this many stretches. */
+export const MAX_PERIODIC_STRETCHES = 5_000_000;
 
 /** Every node must end at or below this; a higher value means the inputs are not physical. */
 export const MAX_PLAUSIBLE_TEMPERATURE_C = 1e6;

@@ -5,7 +5,7 @@ import { makeRunner, runPasses } from './run-passes';
 import { maxDifference, periodicCorrection } from './periodic';
 import { fedDevices, segmentPower } from './segment-power';
 import { passDurationS } from './timeline';
-import { MAX_PERIODIC_ITERATIONS, PERIODIC_TOLERANCE_K } from './constants';
+import { MAX_PERIODIC_ITERATIONS, MAX_PERIODIC_STRETCHES, PERIODIC_TOLERANCE_K } from './constants';
 
 export type PeriodicStart = {
   T: Float64Array;
@@ -41,7 +41,9 @@ export function periodicStartState(sm: StudyModel, batch: boolean, ambient: Ambi
   let on = doc.devices.map(() => true);
   let residual = Infinity;
   let accelerate = true;
-  for (let iterations = 1; iterations <= MAX_PERIODIC_ITERATIONS; iterations++) {
+  let iterations = 0;
+  while (iterations < MAX_PERIODIC_ITERATIONS && runner.stretches() < MAX_PERIODIC_STRETCHES) {
+    iterations++;
     runner.reset(T, on);
     runPasses(doc, runner, ambient, 1, period, 1);
     const change = maxDifference(runner.T, T, sm.dynamicNodes);
@@ -55,5 +57,5 @@ export function periodicStartState(sm: StudyModel, batch: boolean, ambient: Ambi
     // Linear: the closed form is exact, so one period is the whole work.
     if (batch) return { T, on, iterations, residualK: 0, converged: true };
   }
-  return { T, on, iterations: MAX_PERIODIC_ITERATIONS, residualK: residual, converged: false };
+  return { T, on, iterations, residualK: residual, converged: false };
 }
