@@ -1,24 +1,18 @@
-import type { ModeClusters } from './mode-clusters';
 import { addTerm, type ExpSumWorkspace, isolateRoots, refine, resetSum, shifted } from './exp-sum-roots';
 
 /**
- * Largest interior maximum of f(τ) = a_0 + Σ a_k e^(−λ_k τ) on (0, h), with
- * a_k = w_k d_k (w the node's row of W at offset `base`, d = x − x∞ at the segment start). Writes [value, τ] to out
- * and returns true when there is one; false when f has no interior maximum.
+ * Largest interior maximum of f(τ) = a_0 + Σ a_k e^(−λ_k τ) on (0, h), a_k = w_k d_k (w: the
+ * node's row of W at offset `base`; d = x − x∞ at the segment start). Writes [value, τ] to
+ * out and returns true when there is one, false when f has no interior maximum.
  *
- * f′ = Σ c_k e^(−λ_k τ), c_k = −λ_k a_k, has at most as many zeros as its coefficients
- * have sign changes in order of λ (Descartes' rule for exponential sums, Pólya & Szegő II,
- * Part V, from memory). A cheap bound on f′ (clusters as in clusterModes) settles most
- * segments first. No sign change: f is monotone. One: an interior maximum exists exactly when
+ * f′ = Σ c_k e^(−λ_k τ), c_k = −λ_k a_k, has at most as many zeros as its coefficients have
+ * sign changes in order of λ (Descartes' rule for exponential sums, Pólya & Szegő II,
+ * Part V, from memory). None: f is monotone. One: an interior maximum exists exactly when
  * f′(0) > 0 > f′(h), and one bracketed Newton solve finds it. More: full isolation.
  */
 export function interiorPeak(
   ws: ExpSumWorkspace,
   rates: Float64Array,
-  clusters: ModeClusters,
-  decay: Float64Array,
-  gap: Float64Array,
-  db: number,
   w: Float64Array,
   base: number,
   dev: Float64Array,
@@ -27,7 +21,6 @@ export function interiorPeak(
   out: Float64Array,
 ): boolean {
   const n = rates.length;
-  if (monotone(rates, clusters, decay, gap, db, w, base, dev)) return false;
   resetSum(ws);
   for (let k = 0; k < n; k++) addTerm(ws, -rates[k] * w[base + k] * dev[k], rates[k]);
   let changes = 0;
@@ -69,31 +62,3 @@ function valueAt(
   return v;
 }
 
-/** True when bounds of f′ over [0, h] show it never changes sign. */
-function monotone(
-  rates: Float64Array,
-  clusters: ModeClusters,
-  decay: Float64Array,
-  gap: Float64Array,
-  db: number,
-  w: Float64Array,
-  base: number,
-  dev: Float64Array,
-): boolean {
-  let low = 0;
-  let high = 0;
-  let slack = 0;
-  let cluster = 0;
-  for (let k = 0; k < rates.length; k++) {
-    const c = -rates[k] * w[base + k] * dev[k];
-    cluster += c;
-    slack += Math.abs(c) * gap[db + k];
-    if (clusters.last[k] === 1) {
-      const ce = cluster * decay[db + clusters.leader[k]];
-      low += Math.min(cluster, ce);
-      high += Math.max(cluster, ce);
-      cluster = 0;
-    }
-  }
-  return low - slack >= 0 || high + slack <= 0;
-}

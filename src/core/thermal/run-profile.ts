@@ -224,13 +224,15 @@ function runSegments(
         // All a_k of one sign: f is monotone, its ends are its extremes.
         if (!rising && !falling) {
           if (gapReady[slotH] === 0) {
-            // Only segments that may peak inside need the cluster gaps of this duration.
+            // Only segments that may peak inside need the cluster gaps of their duration.
             clusterGaps(clusters, cacheDecay, db, h, cacheGap, db);
             gapReady[slotH] = 1;
           }
-        }
-        if (!rising && !falling && clusterBound(watchRows, base, dev, cacheDecay, cacheGap, db, leader, last, a0) > best + tol) {
-          if (interiorPeak(ws, rates, clusters, cacheDecay, cacheGap, db, watchRows, base, dev, a0, h, found) && found[0] > best) {
+          if (
+            mayPeakInside(rates, watchRows, base, dev, cacheDecay, cacheGap, db, leader, last, a0, best) &&
+            interiorPeak(ws, rates, watchRows, base, dev, a0, h, found) &&
+            found[0] > best
+          ) {
             best = found[0];
             peakTime[w] = t + found[1];
           }
@@ -243,8 +245,13 @@ function runSegments(
   }
 }
 
-/** Upper bound of f on [0, h], each cluster of near-equal rates through its slowest one. */
-function clusterBound(
+/**
+ * True when a segment may peak inside above `best`: the upper bound of f on [0, h] (each
+ * cluster of near-equal rates through its slowest one) exceeds it and bounds of f′ do not
+ * prove f monotone.
+ */
+function mayPeakInside(
+  rates: Float64Array,
   watchRows: Float64Array,
   base: number,
   dev: Float64Array,
@@ -254,20 +261,36 @@ function clusterBound(
   leader: Int32Array,
   last: Uint8Array,
   a0: number,
-): number {
+  best: number,
+): boolean {
   let bound = a0;
   let cluster = 0;
+  let slack = 0;
+  let slope = 0;
+  let slopeSlack = 0;
+  let slopeLow = 0;
+  let slopeHigh = 0;
   for (let k = 0; k < dev.length; k++) {
     const a = watchRows[base + k] * dev[k];
+    const c = -rates[k] * a;
+    const g = gap[db + k];
     cluster += a;
-    bound += (a < 0 ? -a : a) * gap[db + k];
+    slope += c;
+    slack += (a < 0 ? -a : a) * g;
+    slopeSlack += (c < 0 ? -c : c) * g;
     if (last[k] === 1) {
-      const ce = cluster * decay[db + leader[k]];
+      const e = decay[db + leader[k]];
+      const ce = cluster * e;
       bound += cluster > ce ? cluster : ce;
+      const se = slope * e;
+      slopeLow += slope < se ? slope : se;
+      slopeHigh += slope > se ? slope : se;
       cluster = 0;
+      slope = 0;
     }
   }
-  return bound;
+  if (bound + slack <= best + PEAK_SEARCH_ABS_TOL) return false;
+  return !(slopeLow - slopeSlack >= 0 || slopeHigh + slopeSlack <= 0);
 }
 
 function sameRow(a: Float64Array, ia: number, b: Float64Array, ib: number, q: number): boolean {
