@@ -89,11 +89,13 @@ describe('runProfile peaks', () => {
     const inputs = new Float64Array(S * 3);
     for (let s = 0; s < S; s++) {
       durations[s] = rnd() < 0.1 ? 0 : 10 ** (-3 + 3 * rnd());
-      inputs[s * 3] = rnd() < 0.5 ? 0 : 40 * rnd();
-      inputs[s * 3 + 1] = rnd() < 0.5 ? 0 : 40 * rnd();
+      inputs[s * 3] = rnd() < 0.5 ? 0 : 12 * rnd();
+      inputs[s * 3 + 1] = rnd() < 0.5 ? 0 : 12 * rnd();
       inputs[s * 3 + 2] = 25 + 10 * rnd();
     }
-    const initial = Array.from({ length: 8 }, () => 25 + 60 * rnd());
+    // Cool devices on a hot sink: the junctions warm from the sink first, so peaks fall
+    // inside segments as well as at their ends.
+    const initial = [25, 30, 50, 25, 30, 50, 90, 60].map((v) => v + 5 * rnd());
     const watch = [0, 3, 6, 7];
     const run = runProfile(model, { durations, inputs }, { initial, watchNodes: watch });
     // Reference: segment by segment with peakInSegment (full root isolation, no bounds).
@@ -116,6 +118,27 @@ describe('runProfile peaks', () => {
       assertInDelta(run.peaks[w].timeS, best[w].timeS, 1e-6, `peak time ${w}`);
     });
     run.final.forEach((v, i) => assertInDelta(v, T[i], 1e-9, `final ${i}`));
+  });
+
+  it('a junction warmed by a hot sink peaks inside a segment of a long profile', () => {
+    // Device 1 off on a sink at 95 °C: its junction rises towards the sink, then falls with it.
+    const S = 50;
+    const durations = new Float64Array(S).fill(2);
+    const inputs = new Float64Array(S * 3);
+    for (let s = 0; s < S; s++) inputs.set([0, s % 2 === 0 ? 5 : 0, 25], s * 3);
+    const initial = [25, 25, 25, 40, 45, 60, 95, 70];
+    const run = runProfile(model, { durations, inputs }, { initial, watchNodes: [0] });
+    const peak = run.peaks[0];
+    expect(peak.timeS % 2).toBeGreaterThan(1e-3);
+    // Reference: 20,000 exact samples of the segment holding the peak.
+    const s = Math.floor(peak.timeS / 2);
+    let T: Float64Array = Float64Array.from(initial);
+    for (let k = 0; k < s; k++) T = advance(model, T, inputs.subarray(k * 3, k * 3 + 3), 2);
+    const u = Array.from(inputs.subarray(s * 3, s * 3 + 3));
+    const { best, at } = sampledMax(model, Array.from(T), u, 2, 0, 20_000);
+    expect(peak.valueC).toBeGreaterThanOrEqual(best - 1e-12);
+    assertInDelta(peak.valueC, best, 1e-7, 'peak value');
+    assertInDelta(peak.timeS, 2 * s + at, 2e-4, 'peak time');
   });
 
   it('interior peaks inside a dense sampling of a PWM profile are not missed', () => {
