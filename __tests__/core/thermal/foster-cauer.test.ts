@@ -47,7 +47,7 @@ describe('fosterToCauer', () => {
     });
   });
 
-  it('the ladder chained as a network has the Foster Zth(t) from 1e-7 s to 1e3 τmax', () => {
+  it('the ladder chained as a network has the Foster Zth(t) from 1e-7 s to 1e3 τmax (1e-12 relative)', () => {
     // The reference is the analytic Foster sum of the input data.
     const ladder = cauerNetwork(stages, 'j', 'ambient');
     const model = compileNetwork({ nodes: ladder.nodes, links: ladder.links, heatInputs: [ladder.junctionId] });
@@ -57,7 +57,8 @@ describe('fosterToCauer', () => {
       const got = zth(model, 0, 0, t);
       worst = Math.max(worst, Math.abs(got - expected) / expected);
     }
-    expect(worst).toBeLessThan(1e-9);
+    // Measured about 5e-15; 1e-12 leaves room for other platforms' exp.
+    expect(worst).toBeLessThan(1e-12);
   });
 
   it('the junction response read back from the compiled ladder is the Foster set', () => {

@@ -11,8 +11,9 @@ export function zth(model: ModalModel, inputIndex: number, nodeIndex: number, t:
   checkIndex(nodeIndex, 'nodeIndex', model.nodeCount);
   checkNumber(t, 't', 0);
   const { modeCount: n, inputCount: q, rates, outputFromModes: W, modesFromInputs: F } = model;
-  let v = model.steadyFromInputs[nodeIndex * q + inputIndex];
-  for (let k = 0; k < n; k++) v -= W[nodeIndex * n + k] * F[k * q + inputIndex] * Math.exp(-rates[k] * t);
+  // Summed as D + Σ r_k (1 − e^(−λ_k t)) with expm1, so short times keep full precision.
+  let v = model.outputFromInputs[nodeIndex * q + inputIndex];
+  for (let k = 0; k < n; k++) v -= W[nodeIndex * n + k] * F[k * q + inputIndex] * Math.expm1(-rates[k] * t);
   return v;
 }
 
@@ -30,12 +31,6 @@ export function zthTerms(
   checkIndex(nodeIndex, 'nodeIndex', model.nodeCount);
   const { modeCount: n, inputCount: q, rates, outputFromModes: W, modesFromInputs: F } = model;
   const terms: FosterTerm[] = [];
-  let sum = 0;
-  for (let k = 0; k < n; k++) {
-    const r = W[nodeIndex * n + k] * F[k * q + inputIndex];
-    sum += r;
-    terms.push({ rKPerW: r, tauS: 1 / rates[k] });
-  }
-  terms.reverse();
-  return { instantKPerW: model.steadyFromInputs[nodeIndex * q + inputIndex] - sum, terms };
+  for (let k = n - 1; k >= 0; k--) terms.push({ rKPerW: W[nodeIndex * n + k] * F[k * q + inputIndex], tauS: 1 / rates[k] });
+  return { instantKPerW: model.outputFromInputs[nodeIndex * q + inputIndex], terms };
 }
