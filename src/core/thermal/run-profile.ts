@@ -45,10 +45,18 @@ export function runProfile(model: ModalModel, profile: Profile, options: RunOpti
   if (record) boundaries.set(initial, 0);
 
   const watchRows = new Float64Array(nw * n);
-  const watchFeed = new Float64Array(nw * q);
+  // a_0 = W_j x∞ + D_j u = (W F + D)_j u: the watched rows of the steady-state map.
+  const watchSteady = new Float64Array(nw * q);
+  const F = model.modesFromInputs;
+  const columns = new Float64Array(q * n);
+  for (let k = 0; k < n; k++) for (let j = 0; j < q; j++) columns[j * n + k] = F[k * q + j];
   for (let w = 0; w < nw; w++) {
     for (let k = 0; k < n; k++) watchRows[w * n + k] = W[watch[w] * n + k];
-    for (let j = 0; j < q; j++) watchFeed[w * q + j] = D[watch[w] * q + j];
+    for (let j = 0; j < q; j++) {
+      let v = D[watch[w] * q + j];
+      for (let k = 0; k < n; k++) v += watchRows[w * n + k] * F[k * q + j];
+      watchSteady[w * q + j] = v;
+    }
   }
   const peakValue = new Float64Array(nw).fill(-Infinity);
   const peakTime = new Float64Array(nw);
@@ -57,9 +65,9 @@ export function runProfile(model: ModalModel, profile: Profile, options: RunOpti
     toFloat64(durations),
     toFloat64(inputs),
     model.rates,
-    model.modesFromInputs,
+    columns,
     watchRows,
-    watchFeed,
+    watchSteady,
     x,
     peakValue,
     peakTime,
@@ -111,9 +119,9 @@ function runSegments(
   durations: Float64Array,
   inputs: Float64Array,
   rates: Float64Array,
-  F: Float64Array,
+  columns: Float64Array,
   watchRows: Float64Array,
-  watchFeed: Float64Array,
+  watchSteady: Float64Array,
   x: Float64Array,
   peakValue: Float64Array,
   peakTime: Float64Array,
@@ -159,7 +167,7 @@ function runSegments(
       if (slotU < 0) {
         slotU = nextU;
         nextU = (nextU + 1) % C;
-        fillInputSlot(slotU, inputs, row, q, n, nw, F, watchRows, watchFeed, cacheU, cacheXInf, cacheA0);
+        fillInputSlot(slotU, inputs, row, q, n, nw, columns, watchSteady, cacheU, cacheXInf, cacheA0);
       }
     }
     const h = durations[s];
@@ -298,6 +306,7 @@ function sameRow(a: Float64Array, ia: number, b: Float64Array, ib: number, q: nu
   return true;
 }
 
+/** Caches u, x∞ = F u (column by column, zero inputs skipped) and a_0 = (W F + D)_j u. */
 function fillInputSlot(
   slot: number,
   inputs: Float64Array,
@@ -305,23 +314,23 @@ function fillInputSlot(
   q: number,
   n: number,
   nw: number,
-  F: Float64Array,
-  watchRows: Float64Array,
-  watchFeed: Float64Array,
+  columns: Float64Array,
+  watchSteady: Float64Array,
   cacheU: Float64Array,
   cacheXInf: Float64Array,
   cacheA0: Float64Array,
 ): void {
+  const xb = slot * n;
   for (let j = 0; j < q; j++) cacheU[slot * q + j] = inputs[row + j];
-  for (let k = 0; k < n; k++) {
-    let v = 0;
-    for (let j = 0; j < q; j++) v += F[k * q + j] * inputs[row + j];
-    cacheXInf[slot * n + k] = v;
+  for (let k = 0; k < n; k++) cacheXInf[xb + k] = 0;
+  for (let j = 0; j < q; j++) {
+    const uj = inputs[row + j];
+    if (uj === 0) continue;
+    for (let k = 0; k < n; k++) cacheXInf[xb + k] += columns[j * n + k] * uj;
   }
   for (let w = 0; w < nw; w++) {
     let v = 0;
-    for (let k = 0; k < n; k++) v += watchRows[w * n + k] * cacheXInf[slot * n + k];
-    for (let j = 0; j < q; j++) v += watchFeed[w * q + j] * inputs[row + j];
+    for (let j = 0; j < q; j++) v += watchSteady[w * q + j] * inputs[row + j];
     cacheA0[slot * nw + w] = v;
   }
 }
