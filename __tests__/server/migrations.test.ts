@@ -13,11 +13,11 @@ describe('migrations', () => {
   });
 
   it('create every table, apply once only, and roll back cleanly', async () => {
-    expect(await migrateUp(db.sequelize)).toEqual(['0001-initial', '0002-team-work', '0003-catalogues']);
+    expect(await migrateUp(db.sequelize)).toEqual(['0001-initial', '0002-team-work', '0003-catalogues', '0004-parts']);
     expect(await migrateUp(db.sequelize)).toEqual([]);
     const tables = (await db.sequelize.getQueryInterface().showAllTables()).sort();
     expect(tables).toEqual(expect.arrayContaining([
-        'Sessions', 'audit_events', 'comments', 'heatsinks', 'interface_materials', 'invitations', 'mail_messages', 'memberships',
+        'Sessions', 'audit_events', 'comments', 'heatsinks', 'interface_materials', 'invitations', 'mail_messages', 'memberships', 'parts',
         'password_resets', 'reviews', 'revisions', 'schema_migrations', 'studies', 'teams', 'users',
       ]));
 
@@ -25,7 +25,7 @@ describe('migrations', () => {
     const after = await db.sequelize.getQueryInterface().showAllTables();
     expect(after).not.toContain('users');
     expect(after).not.toContain('revisions');
-    expect(await migrateUp(db.sequelize)).toEqual(['0001-initial', '0002-team-work', '0003-catalogues']);
+    expect(await migrateUp(db.sequelize)).toEqual(['0001-initial', '0002-team-work', '0003-catalogues', '0004-parts']);
   });
 
   it('runs SQLite in WAL mode with a busy timeout', async () => {

@@ -6,6 +6,7 @@ import { InterfaceMaterial } from './interface-material';
 import { Invitation } from './invitation';
 import { MailMessage } from './mail-message';
 import { Membership } from './membership';
+import { Part } from './part';
 import { PasswordReset } from './password-reset';
 import { Review } from './review';
 import { Revision } from './revision';
@@ -13,7 +14,7 @@ import { Study } from './study';
 import { Team } from './team';
 import { User } from './user';
 
-const ALL = { User, Team, Membership, Study, Revision, Review, Comment, Invitation, PasswordReset, MailMessage, AuditEvent, Heatsink, InterfaceMaterial };
+const ALL = { User, Team, Membership, Study, Revision, Review, Comment, Invitation, PasswordReset, MailMessage, AuditEvent, Heatsink, InterfaceMaterial, Part };
 export type Models = typeof ALL;
 
 const fk = (name: string, field: string, allowNull = false) => ({ foreignKey: { name, field, allowNull } });
@@ -45,11 +46,12 @@ export function initModels(sequelize: Sequelize): Models {
   AuditEvent.belongsTo(User, { ...fk('actorId', 'actor_id', true), as: 'actor' });
   Team.hasMany(Heatsink, { ...fk('teamId', 'team_id'), as: 'heatsinks' });
   Team.hasMany(InterfaceMaterial, { ...fk('teamId', 'team_id'), as: 'interfaceMaterials' });
+  Team.hasMany(Part, { ...fk('teamId', 'team_id'), as: 'parts' });
 
   return ALL;
 }
 
-export { AuditEvent, Comment, Heatsink, InterfaceMaterial, Invitation, MailMessage, Membership, PasswordReset, Review, Revision, Study, Team, User };
+export { AuditEvent, Comment, Heatsink, InterfaceMaterial, Invitation, MailMessage, Membership, Part, PasswordReset, Review, Revision, Study, Team, User };
 export type { Role } from './membership';
 export type { CommentAnchor } from './comment';
 export type { ReviewDecision } from './review';

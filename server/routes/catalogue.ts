@@ -12,7 +12,7 @@ type Service = ReturnType<typeof catalogueService<unknown>>;
 const upload = multer({ storage: multer.memoryStorage(), limits: { fileSize: MAX_CSV_BYTES, files: 1, fields: 10 } });
 
 /** multer's own errors (file too large, wrong field) become 400s that say which. */
-function receiveFile(req: Request, res: Parameters<ReturnType<typeof upload.single>>[1]): Promise<Buffer> {
+export function receiveFile(req: Request, res: Parameters<ReturnType<typeof upload.single>>[1]): Promise<Buffer> {
   return new Promise((resolve, reject) => {
     upload.single('file')(req, res, (err: unknown) => {
       if (err instanceof multer.MulterError) {
@@ -26,7 +26,7 @@ function receiveFile(req: Request, res: Parameters<ReturnType<typeof upload.sing
   });
 }
 
-function parseMapping(raw: unknown): Record<string, unknown> {
+export function parseMapping(raw: unknown): Record<string, unknown> {
   if (typeof raw !== 'string' || raw === '') throw AppError.badRequest('mapping: send the column mapping as JSON in the "mapping" field', [{ path: 'mapping', message: 'is required' }]);
   try {
     const m = JSON.parse(raw);

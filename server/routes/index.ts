@@ -6,6 +6,7 @@ import { accountsRouter } from './accounts';
 import { catalogueRouter } from './catalogue';
 import { invitationsRouter } from './invitations';
 import { outboxRouter } from './outbox';
+import { partsRouter } from './parts';
 import { passwordResetsRouter } from './password-resets';
 import { sessionRouter } from './session';
 import { solveRouter } from './solve';
@@ -26,6 +27,7 @@ export function apiRouter(deps: Deps) {
   api.use('/invitations', invitationsRouter(deps));
   api.use('/teams', teamsRouter(deps));
   api.use('/studies', studiesRouter(deps));
+  api.use('/parts', partsRouter(deps));
   api.use('/heatsinks', catalogueRouter(deps, heatsinks as never, 'heatsinks.csv'));
   api.use('/interface-materials', catalogueRouter(deps, interfaceMaterials as never, 'interface-materials.csv'));
   api.use('/solve', solveRouter(deps));

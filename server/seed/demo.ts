@@ -5,6 +5,7 @@ import type { Role } from '../models';
 import { hashPassword } from '../services/auth-service';
 import { insertStudy } from '../services/studies-service';
 import { seedDemoCatalogue } from './demo-catalogue';
+import { seedDemoParts } from './demo-parts';
 
 /** Invented demo data: printed in the README and by the server at start-up. */
 export const DEMO_PASSWORD = 'junctura-demo';
@@ -45,6 +46,7 @@ export async function seedDemo(db: Db, bcryptCost: number): Promise<boolean> {
       users.push(user);
     }
     await seedDemoCatalogue(db, team.id, transaction);
+    await seedDemoParts(db, team.id, transaction);
     const designer = users[1];
     for (const doc of docs) {
       await insertStudy(db, { teamId: team.id, authorId: designer.id, title: doc.title, description: doc.description ?? '', document: doc }, transaction);

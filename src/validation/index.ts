@@ -2,3 +2,4 @@ export * from './auth';
 export * from './studies';
 export * from './team';
 export * from './catalogues';
+export * from './parts';

@@ -39,6 +39,14 @@ describe('fitFoster', () => {
     expect(fit.maxRelativeError).toBeLessThan(0.05);
   });
 
+  it('warns when the points stop before the curve levels off', () => {
+    const truth = [{ rKPerW: 0.4, tauS: 5e-3 }, { rKPerW: 0.6, tauS: 0.2 }];
+    const early = logspace(1e-4, 0.05, 20).map((t) => ({ timeS: t, zthKPerW: zth(truth, t) }));
+    expect(fitFoster(early).warning).toMatch(/still rising/);
+    const full = logspace(1e-4, 5, 30).map((t) => ({ timeS: t, zthKPerW: zth(truth, t) }));
+    expect(fitFoster(full).warning).toBeUndefined();
+  });
+
   it('names the bad point', () => {
     expect(() => fitFoster([{ timeS: 1e-3, zthKPerW: 0.1 }, { timeS: -1, zthKPerW: 0.2 }])).toThrow('points[1].timeS');
     expect(() => fitFoster([{ timeS: 1e-3, zthKPerW: 0.1 }])).toThrow(/at least 2/);

@@ -11,11 +11,19 @@ export type FosterFit = {
   /** Largest relative error over the points, and where. */
   maxRelativeError: number;
   maxErrorTimeS: number;
+  /**
+   * Set when the points stop before the curve has levelled off: the total Rθjc (and the slow
+   * terms) are then extrapolated, not measured.
+   */
+  warning?: string;
   /** The time-constant grid the fit chose from. */
   grid: { tauMinS: number; tauMaxS: number; perDecade: number };
 };
 
 export type FosterFitOptions = { perDecade?: number; pruneBelowFraction?: number };
+
+/** Relative slope d ln Zth / d ln t below which the curve counts as levelled off. */
+const LEVELLED_SLOPE = 0.05;
 
 const fosterZthAt = (terms: FosterTermFit[], t: number) => terms.reduce((z, { rKPerW, tauS }) => z + rKPerW * -Math.expm1(-t / tauS), 0);
 
@@ -65,5 +73,12 @@ export function fitFoster(points: ZthPoint[], options: FosterFitOptions = {}): F
       maxErrorTimeS = p.timeS;
     }
   }
-  return { terms, rmsRelativeError: Math.sqrt(sq / sorted.length), maxRelativeError, maxErrorTimeS, grid: { tauMinS, tauMaxS, perDecade } };
+  // Slope d Zth / d ln t at the last point, relative to Zth there: near 0 once it has levelled off.
+  const last = sorted[sorted.length - 1];
+  const slope = terms.reduce((d, { rKPerW, tauS }) => d + rKPerW * (last.timeS / tauS) * Math.exp(-last.timeS / tauS), 0) / fosterZthAt(terms, last.timeS);
+  const warning =
+    slope > LEVELLED_SLOPE
+      ? `Zth is still rising at the last point (${last.timeS} s): the total Rθjc of ${terms.reduce((s, t) => s + t.rKPerW, 0).toPrecision(3)} K/W is extrapolated; add points at longer times or check it against the datasheet's Rθjc`
+      : undefined;
+  return { terms, ...(warning ? { warning } : {}), rmsRelativeError: Math.sqrt(sq / sorted.length), maxRelativeError, maxErrorTimeS, grid: { tauMinS, tauMaxS, perDecade } };
 }
