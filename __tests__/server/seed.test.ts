@@ -17,6 +17,9 @@ describe('seedDemo', () => {
     expect(await ctx.db.models.User.count()).toBe(3);
     expect(await ctx.db.models.Study.count()).toBe(DEMO_STUDY_FILES.length);
     expect(await ctx.db.models.Revision.count()).toBe(DEMO_STUDY_FILES.length);
+    expect(await ctx.db.models.Heatsink.count()).toBe(40);
+    expect(await ctx.db.models.InterfaceMaterial.count()).toBe(8);
+    expect(await ctx.db.models.Part.count()).toBe(6);
   });
 
   it('labels the invented data as demo data', async () => {
@@ -26,6 +29,10 @@ describe('seedDemo', () => {
       expect(s.title).toMatch(/demo/i);
       expect(s.description).toMatch(/demo data/i);
       expect(s.document).toMatchObject({ format: 'junctura-study', version: 1 });
+    }
+    for (const row of [...(await ctx.db.models.Heatsink.findAll()), ...(await ctx.db.models.Part.findAll()), ...(await ctx.db.models.InterfaceMaterial.findAll())]) {
+      expect(row.isDemo).toBe(true);
+      expect(row.name).toMatch(/\(demo\)/);
     }
   });
 
