@@ -1,9 +1,8 @@
-import { checkIndex, checkVector, describe } from './check-input';
-import { PEAK_SEARCH_ABS_TOL, PROFILE_CACHE_SIZE } from './constants';
-import type { ExpSumWorkspace } from './exp-sum-roots';
-import { interiorPeak } from './interior-peak';
-import { clusterGaps, clusterModes, type ModeClusters } from './mode-clusters';
+import { checkIndex, checkVector } from './check-input';
+import { checkProfile } from './check-profile';
+import { clusterModes } from './mode-clusters';
 import { modalFromTemperatures, temperaturesFromModal } from './modal-state';
+import { runSegments } from './profile-kernel';
 import { periodicModes } from './periodic-start';
 import type { ModalModel, Peak, Profile, RunOptions, RunResult } from './types';
 
@@ -15,7 +14,8 @@ import type { ModalModel, Peak, Profile, RunOptions, RunResult } from './types';
  * patterns cost no exp. Per watched node, cheap upper bounds of f on [0, h] (termwise
  * first, then each cluster of near-equal rates through its slowest one, see clusterModes)
  * skip segments that cannot raise the peak, and modal terms of one sign prove f monotone;
- * the exact interior search (interiorPeak) runs only when a peak could hide inside. Memory is fixed unless recordBoundaries is set.
+ * the exact interior search (interiorPeak) runs only when a peak could hide inside.
+ * Memory is fixed unless recordBoundaries is set.
  *
  * Peaks are exact maxima over the whole profile (earliest time on a tie; s from its start).
  * Zero-length segments take no time and hold no peak. Bad durations or inputs throw
@@ -60,7 +60,7 @@ export function runProfile(model: ModalModel, profile: Profile, options: RunOpti
   }
   const peakValue = new Float64Array(nw).fill(-Infinity);
   const peakTime = new Float64Array(nw);
-  const state: BoundaryState = { model, x, u: new Float64Array(q), inputs, boundaries, boundaryTimes };
+  const state: BoundaryState = { model, x, inputs, boundaries, boundaryTimes };
   runSegments(
     toFloat64(durations),
     toFloat64(inputs),
@@ -95,7 +95,6 @@ export function runProfile(model: ModalModel, profile: Profile, options: RunOpti
 type BoundaryState = {
   model: ModalModel;
   x: Float64Array;
-  u: Float64Array;
   inputs: ArrayLike<number>;
   boundaries: Float64Array;
   boundaryTimes: Float64Array;
@@ -103,261 +102,20 @@ type BoundaryState = {
 
 /** Stores the state at the end of segment s, massless nodes at that segment's inputs. */
 function recordBoundary(state: BoundaryState, s: number, t: number): void {
-  const { model, x, u, inputs, boundaries, boundaryTimes } = state;
+  const { model, x, inputs, boundaries, boundaryTimes } = state;
   const N = model.nodeCount;
   const q = model.inputCount;
-  for (let j = 0; j < q; j++) u[j] = inputs[s * q + j];
-  temperaturesFromModal(model, x, u, boundaries.subarray((s + 1) * N, (s + 2) * N));
-  boundaryTimes[s + 1] = t;
-}
-
-/**
- * The segment loop, on typed arrays only so that it stays monomorphic. Cache slots hold
- * x∞ (and each watched node's a_0) per recent input vector, e^(−λh) per recent duration.
- */
-function runSegments(
-  durations: Float64Array,
-  inputs: Float64Array,
-  rates: Float64Array,
-  columns: Float64Array,
-  watchRows: Float64Array,
-  watchSteady: Float64Array,
-  x: Float64Array,
-  peakValue: Float64Array,
-  peakTime: Float64Array,
-  ws: ExpSumWorkspace,
-  clusters: ModeClusters,
-  q: number,
-  onBoundary: ((s: number, t: number) => void) | null,
-): void {
-  const n = rates.length;
-  const nw = peakValue.length;
-  // Module bindings read through getters once compiled to CommonJS: keep locals.
-  const C = PROFILE_CACHE_SIZE;
-  const tol = PEAK_SEARCH_ABS_TOL;
-  const cacheU = new Float64Array(C * q).fill(NaN);
-  const cacheXInf = new Float64Array(C * n);
-  const cacheA0 = new Float64Array(C * nw);
-  const cacheH = new Float64Array(C).fill(NaN);
-  const cacheDecay = new Float64Array(C * n);
-  const cacheGap = new Float64Array(C * n);
-  const gapReady = new Uint8Array(C);
-  const { leader, last } = clusters;
-  const found = new Float64Array(2);
-  const dev = new Float64Array(n);
-  const devEnd = new Float64Array(n);
-  const moveAbs = new Float64Array(n);
-  const watchAbs = watchRows.map(Math.abs);
-  let nextU = 0;
-  let nextH = 0;
-  let slotU = -1;
-  let slotH = -1;
-  let t = 0;
-  for (let s = 0; s < durations.length; s++) {
-    const row = s * q;
-    // Input cache: same slot as last segment is the common case.
-    if (slotU < 0 || !sameRow(cacheU, slotU * q, inputs, row, q)) {
-      slotU = -1;
-      for (let c = 0; c < C; c++) {
-        if (sameRow(cacheU, c * q, inputs, row, q)) {
-          slotU = c;
-          break;
-        }
-      }
-      if (slotU < 0) {
-        slotU = nextU;
-        nextU = (nextU + 1) % C;
-        fillInputSlot(slotU, inputs, row, q, n, nw, columns, watchSteady, cacheU, cacheXInf, cacheA0);
-      }
-    }
-    const h = durations[s];
-    if (h > 0) {
-      if (slotH < 0 || cacheH[slotH] !== h) {
-        slotH = -1;
-        for (let c = 0; c < C; c++) {
-          if (cacheH[c] === h) {
-            slotH = c;
-            break;
-          }
-        }
-        if (slotH < 0) {
-          slotH = nextH;
-          nextH = (nextH + 1) % C;
-          cacheH[slotH] = h;
-          for (let k = 0; k < n; k++) cacheDecay[slotH * n + k] = Math.exp(-rates[k] * h);
-          gapReady[slotH] = 0;
-        }
-      }
-      const xb = slotU * n;
-      const db = slotH * n;
-      // Shared by every watched node: d = x − x∞ at the start and at the end of the segment.
-      for (let k = 0; k < n; k++) {
-        const xi = cacheXInf[xb + k];
-        const d = x[k] - xi;
-        const de = d * cacheDecay[db + k];
-        dev[k] = d;
-        devEnd[k] = de;
-        moveAbs[k] = d > de ? d - de : de - d;
-        x[k] = xi + de;
-      }
-      for (let w = 0; w < nw; w++) {
-        const base = w * n;
-        const a0 = cacheA0[slotU * nw + w];
-        let end = a0;
-        let excess = 0;
-        for (let k = 0; k < n; k++) {
-          end += watchRows[base + k] * devEnd[k];
-          excess += watchAbs[base + k] * moveAbs[k];
-        }
-        // f(τ) − f(h) = Σ a_k (e^(−λτ) − e^(−λh)) ≤ Σ |w_k| |d_k| (1 − e^(−λ_k h)).
-        let best = peakValue[w];
-        if (end + excess <= best + tol) continue;
-        let start = a0;
-        let rising = true;
-        let falling = true;
-        for (let k = 0; k < n; k++) {
-          const a = watchRows[base + k] * dev[k];
-          start += a;
-          if (a > 0) rising = false;
-          else if (a < 0) falling = false;
-        }
-        if (start > best) {
-          best = start;
-          peakTime[w] = t;
-        }
-        if (end > best) {
-          best = end;
-          peakTime[w] = t + h;
-        }
-        // All a_k of one sign: f is monotone, its ends are its extremes.
-        if (!rising && !falling) {
-          if (gapReady[slotH] === 0) {
-            // Only segments that may peak inside need the cluster gaps of their duration.
-            clusterGaps(clusters, cacheDecay, db, h, cacheGap, db);
-            gapReady[slotH] = 1;
-          }
-          if (
-            mayPeakInside(rates, watchRows, base, dev, cacheDecay, cacheGap, db, leader, last, a0, best) &&
-            interiorPeak(ws, rates, watchRows, base, dev, a0, h, found) &&
-            found[0] > best
-          ) {
-            best = found[0];
-            peakTime[w] = t + found[1];
-          }
-        }
-        peakValue[w] = best;
-      }
-      t += h;
-    }
-    if (onBoundary !== null) onBoundary(s, t);
-  }
-}
-
-/**
- * True when a segment may peak inside above `best`: the upper bound of f on [0, h] (each
- * cluster of near-equal rates through its slowest one) exceeds it and bounds of f′ do not
- * prove f monotone.
- */
-function mayPeakInside(
-  rates: Float64Array,
-  watchRows: Float64Array,
-  base: number,
-  dev: Float64Array,
-  decay: Float64Array,
-  gap: Float64Array,
-  db: number,
-  leader: Int32Array,
-  last: Uint8Array,
-  a0: number,
-  best: number,
-): boolean {
-  let bound = a0;
-  let cluster = 0;
-  let slack = 0;
-  let slope = 0;
-  let slopeSlack = 0;
-  let slopeLow = 0;
-  let slopeHigh = 0;
-  for (let k = 0; k < dev.length; k++) {
-    const a = watchRows[base + k] * dev[k];
-    const c = -rates[k] * a;
-    const g = gap[db + k];
-    cluster += a;
-    slope += c;
-    slack += (a < 0 ? -a : a) * g;
-    slopeSlack += (c < 0 ? -c : c) * g;
-    if (last[k] === 1) {
-      const e = decay[db + leader[k]];
-      const ce = cluster * e;
-      bound += cluster > ce ? cluster : ce;
-      const se = slope * e;
-      slopeLow += slope < se ? slope : se;
-      slopeHigh += slope > se ? slope : se;
-      cluster = 0;
-      slope = 0;
-    }
-  }
-  if (bound + slack <= best + PEAK_SEARCH_ABS_TOL) return false;
-  return !(slopeLow - slopeSlack >= 0 || slopeHigh + slopeSlack <= 0);
-}
-
-function sameRow(a: Float64Array, ia: number, b: Float64Array, ib: number, q: number): boolean {
-  for (let j = 0; j < q; j++) if (a[ia + j] !== b[ib + j]) return false;
-  return true;
-}
-
-/** Caches u, x∞ = F u (column by column, zero inputs skipped) and a_0 = (W F + D)_j u. */
-function fillInputSlot(
-  slot: number,
-  inputs: Float64Array,
-  row: number,
-  q: number,
-  n: number,
-  nw: number,
-  columns: Float64Array,
-  watchSteady: Float64Array,
-  cacheU: Float64Array,
-  cacheXInf: Float64Array,
-  cacheA0: Float64Array,
-): void {
-  const xb = slot * n;
-  for (let j = 0; j < q; j++) cacheU[slot * q + j] = inputs[row + j];
-  for (let k = 0; k < n; k++) cacheXInf[xb + k] = 0;
-  for (let j = 0; j < q; j++) {
-    const uj = inputs[row + j];
-    if (uj === 0) continue;
-    for (let k = 0; k < n; k++) cacheXInf[xb + k] += columns[j * n + k] * uj;
-  }
-  for (let w = 0; w < nw; w++) {
+  const { modeCount: n, outputFromModes: W, outputFromInputs: D } = model;
+  for (let i = 0; i < N; i++) {
     let v = 0;
-    for (let j = 0; j < q; j++) v += watchSteady[w * q + j] * inputs[row + j];
-    cacheA0[slot * nw + w] = v;
+    for (let k = 0; k < n; k++) v += W[i * n + k] * x[k];
+    for (let j = 0; j < q; j++) v += D[i * q + j] * inputs[s * q + j];
+    boundaries[(s + 1) * N + i] = v;
   }
+  boundaryTimes[s + 1] = t;
 }
 
 function toFloat64(values: ArrayLike<number>): Float64Array {
   return values instanceof Float64Array ? values : Float64Array.from(values);
 }
 
-function checkProfile(profile: Profile, q: number): { durations: ArrayLike<number>; inputs: ArrayLike<number> } {
-  if (profile == null || typeof profile !== 'object') throw new TypeError(`profile: expected an object, got ${describe(profile)}`);
-  const { durations, inputs } = profile;
-  if (durations == null || typeof durations.length !== 'number') throw new TypeError('profile.durations: expected an array of numbers');
-  if (inputs == null || typeof inputs.length !== 'number') throw new TypeError('profile.inputs: expected an array of numbers');
-  if (durations.length === 0) throw new RangeError('profile.durations: at least one segment is required');
-  if (inputs.length !== durations.length * q) {
-    throw new RangeError(`profile.inputs: expected ${durations.length} × ${q} = ${durations.length * q} values, got ${inputs.length}`);
-  }
-  // One pass up front keeps the segment loop free of checks.
-  for (let s = 0; s < durations.length; s++) {
-    const h = durations[s];
-    if (typeof h !== 'number') throw new TypeError(`profile.durations[${s}]: expected a number, got ${describe(h)}`);
-    if (!(h >= 0 && h < Infinity)) throw new RangeError(`profile.durations[${s}]: must be finite and ≥ 0, got ${h}`);
-  }
-  for (let i = 0; i < inputs.length; i++) {
-    const v = inputs[i];
-    if (typeof v !== 'number') throw new TypeError(`profile.inputs[${i}]: expected a number, got ${describe(v)}`);
-    if (v - v !== 0) throw new RangeError(`profile.inputs[${i}]: must be finite, got ${v}`);
-  }
-  return { durations, inputs };
-}
