@@ -10,6 +10,7 @@ import { createDb, type Db } from './db';
 import type { Deps } from './deps';
 import { createMailer } from './mail/mailer';
 import { AppError, errorHandler, notFoundHandler } from './errors';
+import { sameOrigin } from './middleware/same-origin';
 import { apiRouter } from './routes';
 
 const SequelizeStore = connectSessionSequelize(session.Store);
@@ -17,7 +18,8 @@ const SequelizeStore = connectSessionSequelize(session.Store);
 export const SESSION_COOKIE = 'junctura.sid';
 const SESSION_MAX_AGE_MS = 7 * 24 * 3600 * 1000;
 
-export type AppLocals = { db: Db; close: () => Promise<void> };
+/** `stop` ends the app's timers (the session sweep); `close` also closes the database. */
+export type AppLocals = { db: Db; stop: () => void; close: () => Promise<void> };
 
 /**
  * Builds the Express app: JSON API under /api and, when it has been exported, the web app.
@@ -62,6 +64,7 @@ export function createApp(config: Config, db: Db = createDb(config.databaseUrl))
 
   if (config.corsOrigins.length > 0) app.use('/api', cors({ origin: config.corsOrigins, credentials: true }));
   const deps: Deps = { db, config, mailer: createMailer(db, { smtpUrl: config.smtpUrl, from: config.mailFrom }) };
+  app.use('/api', sameOrigin([config.appUrl, ...config.corsOrigins]));
   app.use('/api', apiRouter(deps));
   app.use('/api', (req, _res, next) => next(new AppError(404, 'not_found', `No route for ${req.method} /api${req.path}`)));
 
@@ -78,10 +81,12 @@ export function createApp(config: Config, db: Db = createDb(config.databaseUrl))
   app.use(notFoundHandler);
   app.use(errorHandler);
 
+  const stop = () => (store as unknown as { stopExpiringSessions: () => void }).stopExpiringSessions();
   const locals: AppLocals = {
     db,
+    stop,
     close: async () => {
-      (store as unknown as { stopExpiringSessions: () => void }).stopExpiringSessions();
+      stop();
       await db.sequelize.close();
     },
   };
