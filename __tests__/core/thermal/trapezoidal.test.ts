@@ -37,10 +37,13 @@ describe('simulateTrapezoidal', () => {
     expect(errors[3]).toBeLessThan(1e-3);
   });
 
-  it('sampled peaks approach the exact peak from below as the step shrinks', () => {
-    const exact = runProfile(compileNetwork(spec), profile, { watchNodes: [0] }).peaks[0];
-    const coarse = simulateTrapezoidal(spec, profile, { dtS: 0.1, watchNodes: [0] }).peaks[0];
-    const fine = simulateTrapezoidal(spec, profile, { dtS: 0.005, watchNodes: [0] }).peaks[0];
+  it.each([
+    ['junction', 0],
+    ['massless case', 1],
+  ])('sampled %s peak approaches the exact peak as the step shrinks', (_, node) => {
+    const exact = runProfile(compileNetwork(spec), profile, { watchNodes: [node] }).peaks[0];
+    const coarse = simulateTrapezoidal(spec, profile, { dtS: 0.1, watchNodes: [node] }).peaks[0];
+    const fine = simulateTrapezoidal(spec, profile, { dtS: 0.005, watchNodes: [node] }).peaks[0];
     expect(Math.abs(fine.valueC - exact.valueC)).toBeLessThan(Math.abs(coarse.valueC - exact.valueC));
     expect(Math.abs(fine.valueC - exact.valueC)).toBeLessThan(1e-4);
     expect(Math.abs(fine.timeS - exact.timeS)).toBeLessThan(0.01);

@@ -30,4 +30,4 @@ export { fosterToCauer } from './foster-to-cauer';
 export { cauerToFoster } from './cauer-to-foster';
 export { cauerNetwork } from './cauer-network';
 export { simulateTrapezoidal } from './trapezoidal';
-export type { TrapezoidalOptions } from './trapezoidal';
+export type { TrapezoidalOptions, TrapezoidalResult } from './trapezoidal';

@@ -1,6 +1,7 @@
 import { LuDecomposition } from 'ml-matrix';
 import { assembleNetwork } from './assemble';
 import { checkIndex, checkNumber, checkVector } from './check-input';
+import { checkProfile } from './check-profile';
 import { condenseNetwork, type CondensedNetwork } from './condense';
 import { toMatrix } from './dense';
 import type { NetworkSpec, Peak, Profile, RunOptions, RunResult } from './types';
@@ -11,6 +12,16 @@ export type TrapezoidalOptions = Omit<RunOptions, 'periodic'> & {
   dtS: number;
 };
 
+export type TrapezoidalResult = RunResult & {
+  /** Steps taken in all. */
+  stepCount: number;
+  /** LU factorisations made (one per distinct step size, at most FACTOR_CACHE_SIZE kept). */
+  factorisations: number;
+};
+
+/** Distinct step sizes whose factors are kept; profiles of many lengths refactor. */
+const FACTOR_CACHE_SIZE = 64;
+
 /** LU factors of (C/dt + G/2) and the explicit half (C/dt − G/2), for one step size. */
 type StepFactor = { lu: Float64Array; pivot: Int32Array; explicit: Float64Array };
 
@@ -19,7 +30,7 @@ type StepFactor = { lu: Float64Array; pivot: Int32Array; explicit: Float64Array 
  * solver only: (C/dt + G/2) T⁺ = (C/dt − G/2) T + B u on the condensed system, second-order
  * accurate; peaks are sampled at the steps. Same profile format and result as runProfile.
  */
-export function simulateTrapezoidal(spec: NetworkSpec, profile: Profile, options: TrapezoidalOptions): RunResult {
+export function simulateTrapezoidal(spec: NetworkSpec, profile: Profile, options: TrapezoidalOptions): TrapezoidalResult {
   validateNetwork(spec);
   const dtMax = checkNumber(options?.dtS, 'options.dtS', 0, true);
   const net = assembleNetwork(spec);
@@ -27,17 +38,14 @@ export function simulateTrapezoidal(spec: NetworkSpec, profile: Profile, options
   const N = net.nodeCount;
   const q = net.inputCount;
   const n = red.dynamic.length;
-  const { durations, inputs } = profile;
-  checkVector(durations, 'profile.durations', durations.length);
-  checkVector(inputs, 'profile.inputs', durations.length * q);
-  if (durations.length === 0) throw new RangeError('profile.durations: at least one segment is required');
+  const { durations, inputs } = checkProfile(profile, q);
   const watch = (options.watchNodes ?? []).map((j, w) => checkIndex(j, `options.watchNodes[${w}]`, N));
 
   const T = new Float64Array(N);
   const u = Float64Array.from({ length: q }, (_, j) => inputs[j]);
   if (options.initial !== undefined) {
     checkVector(options.initial, 'options.initial', N);
-    T.set(Array.from(options.initial));
+    for (let i = 0; i < N; i++) T[i] = options.initial[i];
   } else {
     T.fill(u[q - 1]);
   }
@@ -50,32 +58,35 @@ export function simulateTrapezoidal(spec: NetworkSpec, profile: Profile, options
   boundaries?.set(T, 0);
 
   const factors = new Map<number, StepFactor>();
+  let factorisations = 0;
+  let stepCount = 0;
   const rhs = new Float64Array(n);
-  const peaks: Peak[] = watch.map((j) => ({ valueC: T[j], timeS: 0 }));
-  const sample = (t: number) => {
-    watch.forEach((j, w) => {
-      if (T[j] > peaks[w].valueC) peaks[w] = { valueC: T[j], timeS: t };
-    });
-  };
+  const peakValue = Float64Array.from(watch, (j) => T[j]);
+  const watchAt = Int32Array.from(watch, (j) => {
+    const p = red.dynamic.indexOf(j);
+    return p >= 0 ? p : -red.massless.indexOf(j) - 1;
+  });
+  const peakTime = new Float64Array(watch.length);
   let t = 0;
   for (let s = 0; s < S; s++) {
-    const h = checkNumber(durations[s], `profile.durations[${s}]`, 0);
+    const h = durations[s];
     for (let j = 0; j < q; j++) u[j] = inputs[s * q + j];
     if (h > 0) {
-      fillMassless(red, Td, u, T);
-      sample(t);
+      sample(watchAt, red, Td, u, peakValue, peakTime, t);
       const steps = Math.ceil(h / dtMax);
       const dt = h / steps;
       let f = factors.get(dt);
       if (!f) {
+        if (factors.size >= FACTOR_CACHE_SIZE) factors.clear();
         f = factorStep(red, dt);
         factors.set(dt, f);
+        factorisations++;
       }
       for (let k = 0; k < steps; k++) {
         step(f, red, Td, u, rhs, n, q);
-        fillMassless(red, Td, u, T);
-        sample(t + (k + 1) * dt);
+        sample(watchAt, red, Td, u, peakValue, peakTime, t + (k + 1) * dt);
       }
+      stepCount += steps;
       t += h;
     }
     if (boundaries && boundaryTimes) {
@@ -85,7 +96,45 @@ export function simulateTrapezoidal(spec: NetworkSpec, profile: Profile, options
     }
   }
   fillMassless(red, Td, u, T);
-  return { peaks, final: T.slice(), initial, ...(boundaries ? { boundaries, boundaryTimes } : {}) };
+  const peaks: Peak[] = watch.map((_, w) => ({ valueC: peakValue[w], timeS: peakTime[w] }));
+  return {
+    peaks,
+    final: T.slice(),
+    initial,
+    stepCount,
+    factorisations,
+    ...(boundaries ? { boundaries, boundaryTimes } : {}),
+  };
+}
+
+/** Records new peaks of the watched nodes: p ≥ 0 is a dynamic node, p < 0 massless −p − 1. */
+function sample(
+  watchAt: Int32Array,
+  red: CondensedNetwork,
+  Td: Float64Array,
+  u: Float64Array,
+  peakValue: Float64Array,
+  peakTime: Float64Array,
+  t: number,
+): void {
+  const n = Td.length;
+  const q = u.length;
+  for (let w = 0; w < watchAt.length; w++) {
+    const p = watchAt[w];
+    let v: number;
+    if (p >= 0) {
+      v = Td[p];
+    } else {
+      const a = -p - 1;
+      v = 0;
+      for (let r = 0; r < n; r++) v += red.masslessFromDynamic[a * n + r] * Td[r];
+      for (let j = 0; j < q; j++) v += red.masslessFromInputs[a * q + j] * u[j];
+    }
+    if (v > peakValue[w]) {
+      peakValue[w] = v;
+      peakTime[w] = t;
+    }
+  }
 }
 
 function factorStep(red: CondensedNetwork, dt: number): StepFactor {
