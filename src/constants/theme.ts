@@ -31,6 +31,8 @@ export const color = {
   info: '#2F5888',
   infoSoft: '#E0E8F3',
   focus: '#3D8FA0',
+  /** Dims the page behind a menu or sheet. */
+  scrim: 'rgba(27, 34, 38, 0.35)',
 } as const;
 
 export const spacing = {

@@ -2,7 +2,7 @@ import { ActivityIndicator, Pressable, StyleSheet, Text, type PressableProps, ty
 
 import { color, fontFamily, fontSize, radius, size, spacing } from '@/constants/theme';
 
-export type ButtonVariant = 'primary' | 'secondary' | 'ghost';
+export type ButtonVariant = 'primary' | 'secondary' | 'ghost' | 'danger';
 
 export type ButtonProps = Omit<PressableProps, 'children' | 'style'> & {
   label: string;
@@ -29,7 +29,7 @@ export function Button({ label, variant = 'primary', busy = false, disabled, sty
       ]}
       {...rest}
     >
-      {busy ? <ActivityIndicator size="small" color={variant === 'primary' ? color.onAccent : color.accent} /> : null}
+      {busy ? <ActivityIndicator size="small" color={variant === 'primary' || variant === 'danger' ? color.onAccent : color.accent} /> : null}
       <Text style={[styles.label, labels[variant]]}>{label}</Text>
     </Pressable>
   );
@@ -54,16 +54,19 @@ const containers = StyleSheet.create({
   primary: { backgroundColor: color.accent, borderColor: color.accent },
   secondary: { backgroundColor: color.surface, borderColor: color.borderStrong },
   ghost: { backgroundColor: 'transparent', borderColor: 'transparent', paddingHorizontal: spacing.sm },
+  danger: { backgroundColor: color.danger, borderColor: color.danger },
 });
 
 const pressedStyles = StyleSheet.create({
   primary: { backgroundColor: color.accentPressed, borderColor: color.accentPressed },
   secondary: { backgroundColor: color.surfaceMuted },
   ghost: { backgroundColor: color.surfaceMuted },
+  danger: { opacity: 0.85 },
 });
 
 const labels = StyleSheet.create({
   primary: { color: color.onAccent },
   secondary: { color: color.ink },
   ghost: { color: color.accent },
+  danger: { color: color.onAccent },
 });

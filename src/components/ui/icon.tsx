@@ -12,6 +12,11 @@ const paths = {
   sortUp: 'M8 14l4-5 4 5z',
   sortDown: 'M8 10l4 5 4-5z',
   sortNone: 'M8 10l4-4 4 4z M8 14l4 4 4-4z',
+  team: 'M9 11a3.5 3.5 0 1 0 0-7 3.5 3.5 0 0 0 0 7z M2.5 20c.9-3.4 3.4-5.2 6.5-5.2s5.6 1.8 6.5 5.2 M16 4.3a3.5 3.5 0 0 1 0 6.4 M18 14.9c1.8.7 3 2.4 3.5 5.1',
+  outbox: 'M3 6h18v12H3z M3 7l9 6 9-6',
+  activity: 'M9 6h11 M9 12h11 M9 18h11 M4.5 6h.01 M4.5 12h.01 M4.5 18h.01',
+  chevronDown: 'M6 9l6 6 6-6',
+  pin: 'M12 21s-6-5.6-6-11a6 6 0 1 1 12 0c0 5.4-6 11-6 11z M12 12.5a2.5 2.5 0 1 0 0-5 2.5 2.5 0 0 0 0 5z',
 } as const;
 
 export type IconName = keyof typeof paths;

@@ -5,6 +5,8 @@ export type { ButtonProps, ButtonVariant } from './button';
 export { Card } from './card';
 export { Chip } from './chip';
 export type { ChipProps } from './chip';
+export { ConfirmRow } from './confirm-row';
+export type { ConfirmRowProps } from './confirm-row';
 export { EmptyState } from './empty-state';
 export type { EmptyStateProps } from './empty-state';
 export { ErrorState } from './error-state';
