@@ -1,4 +1,6 @@
 /** Unit, server and screen tests. End-to-end tests live in jest.e2e.config.js. */
+// d3's packages ship ES modules only; jest loads their UMD builds instead.
+const d3Umd = { '^(d3-[a-z-]+)$': '<rootDir>/node_modules/$1/dist/$1.js' };
 const nodeProject = (displayName, roots) => ({
   displayName,
   testEnvironment: 'node',
@@ -15,18 +17,18 @@ const nodeProject = (displayName, roots) => ({
       },
     ],
   },
-  moduleNameMapper: { '^@/(.*)$': '<rootDir>/src/$1' },
+  moduleNameMapper: { '^@/(.*)$': '<rootDir>/src/$1', ...d3Umd },
 });
 
 module.exports = {
   projects: [
-    nodeProject('core', ['core', 'cli', 'validation']),
+    nodeProject('core', ['core', 'cli', 'validation', 'charts']),
     { ...nodeProject('server', ['server']), maxWorkers: 1 },
     {
       displayName: 'screens',
       preset: 'jest-expo',
       testMatch: ['<rootDir>/__tests__/screens/**/*.test.tsx'],
-      moduleNameMapper: { '^@/(.*)$': '<rootDir>/src/$1' },
+      moduleNameMapper: { '^@/(.*)$': '<rootDir>/src/$1', ...d3Umd },
     },
   ],
 };

@@ -35,6 +35,24 @@ export const color = {
   scrim: 'rgba(27, 34, 38, 0.35)',
 } as const;
 
+/**
+ * Chart palette: one hue per device (junction and case share it and differ by line style),
+ * warm neutrals for sinks and air, and the two limit lines. Chosen to stay apart for common
+ * colour-vision deficiencies; every series also has its own dash pattern.
+ */
+export const chartColor = {
+  devices: ['#1E6270', '#B4541F', '#6A4C93', '#4F6B1C', '#A13D63', '#2F5888'],
+  sinks: ['#7A5C3E', '#5C6B73', '#8C6D1F'],
+  enclosure: '#6E7F86',
+  ambient: '#9AA3A8',
+  tjMax: '#A3312A',
+  target: '#8A5A00',
+  grid: '#E4E7E1',
+  axis: '#B4BBB3',
+  cursor: '#1B2226',
+  selection: 'rgba(30, 98, 112, 0.12)',
+} as const;
+
 export const spacing = {
   xxs: 2,
   xs: 4,

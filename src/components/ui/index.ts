@@ -26,3 +26,4 @@ export type { TextProps, TextTone, TextVariant } from './text';
 export { TextField } from './text-field';
 export type { TextFieldProps } from './text-field';
 export { useIsWide } from './use-is-wide';
+export { saveTextFile } from './save-text-file';

@@ -3,6 +3,7 @@ import { StyleSheet, View } from 'react-native';
 import { errorMessage, errorStatus } from '@/api';
 import { Card, EmptyState, ErrorState, LoadingState, Page, Text, useIsWide } from '@/components/ui';
 import { spacing } from '@/constants/theme';
+import { StudyResults } from '@/features/results/study-results';
 
 import { useStudy } from './api';
 import { BackLink } from './components/back-link';
@@ -50,6 +51,7 @@ export function StudyScreen({ id }: StudyScreenProps) {
           <Text variant="heading">Description</Text>
           <Text tone={data.description ? 'default' : 'muted'}>{data.description || 'No description.'}</Text>
         </Card>
+        <StudyResults document={data.document} />
         <StudyInputs document={data.document} />
         <EstimateCaution />
       </>

@@ -1,0 +1,90 @@
+import { useMemo, useState } from 'react';
+import { StyleSheet, View } from 'react-native';
+
+import { HeatCurvesChart } from '@/charts/heat-curves-chart';
+import { Button, Card, InlineAlert, LoadingState, Text, saveTextFile, useIsWide } from '@/components/ui';
+import type { StudyResult } from '@/core/study';
+import { spacing } from '@/constants/theme';
+
+import { DeviceTable } from './components/device-table';
+import { EventList } from './components/event-list';
+import { ResultSection } from './components/result-section';
+import { ResultsCaution } from './components/results-caution';
+import { SinkTable } from './components/sink-table';
+import { VerdictPanel } from './components/verdict-panel';
+import { curvesCsv, curvesFileName } from '@/charts/curves-csv';
+import { useStudyResult } from './use-study-result';
+import { studyVerdict } from './verdict';
+
+export type StudyResultsProps = {
+  /** The saved study document, as the API returns it. */
+  document: unknown;
+  /** A time picked on the chart (s), e.g. to pin a comment to it. */
+  onPickTime?: (timeS: number) => void;
+};
+
+function Solved({ result, onPickTime }: { result: StudyResult; onPickTime?: (timeS: number) => void }) {
+  const wide = useIsWide();
+  const [cursorS, setCursorS] = useState<number | null>(null);
+  const verdict = useMemo(() => studyVerdict(result), [result]);
+  const devices = useMemo(() => Object.values(result.devices), [result]);
+  const [saveError, setSaveError] = useState<string | null>(null);
+
+  const download = async () => {
+    setSaveError(null);
+    try {
+      await saveTextFile(curvesFileName(result.title), curvesCsv(result.series ?? {}));
+    } catch (error) {
+      setSaveError(`The CSV could not be saved: ${error instanceof Error ? error.message : String(error)}`);
+    }
+  };
+
+  return (
+    <>
+      <VerdictPanel verdict={verdict} warnings={result.warnings} />
+      <ResultSection title="Heat curves">
+        <HeatCurvesChart
+          result={result}
+          cursorS={cursorS}
+          onCursorChange={setCursorS}
+          onPickTime={onPickTime}
+          height={wide ? 360 : 280}
+        />
+        <View style={styles.actions}>
+          <Button label="Download curves (CSV)" variant="secondary" onPress={download} disabled={!result.series} />
+        </View>
+        {saveError ? <InlineAlert message={saveError} /> : null}
+      </ResultSection>
+      <ResultSection title={devices.length === 1 ? 'Device' : 'Devices'}>
+        <DeviceTable devices={devices} />
+      </ResultSection>
+      <ResultSection title="Sinks">
+        <SinkTable result={result} />
+      </ResultSection>
+      <ResultSection title="Events">
+        <EventList events={result.events} counts={result.eventCounts} selectedS={cursorS} onSelect={setCursorS} />
+      </ResultSection>
+      <ResultsCaution hotSinks={Object.values(result.sinks)} />
+    </>
+  );
+}
+
+/** The study's answer, solved in the client: verdict, heat curves, per-device and per-sink peaks, events. */
+export function StudyResults({ document, onPickTime }: StudyResultsProps) {
+  const state = useStudyResult(document);
+  if (state.kind === 'empty') return null;
+  return (
+    <Card style={styles.card}>
+      <Text variant="heading">Results</Text>
+      {state.kind === 'solving' ? <LoadingState label="Solving the study…" /> : null}
+      {state.kind === 'invalid' ? <Text tone="muted">No results: the saved document could not be read (see the design inputs).</Text> : null}
+      {state.kind === 'failed' ? <InlineAlert message={`The study could not be solved: ${state.message}`} /> : null}
+      {state.kind === 'ok' ? <Solved result={state.result} onPickTime={onPickTime} /> : null}
+    </Card>
+  );
+}
+
+const styles = StyleSheet.create({
+  card: { gap: spacing.md },
+  actions: { flexDirection: 'row', flexWrap: 'wrap', gap: spacing.sm },
+});

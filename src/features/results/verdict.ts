@@ -1,0 +1,54 @@
+import type { DeviceResult, StudyResult } from '@/core/study';
+import { formatDuration, formatNumber, formatQuantity } from '@/features/studies/quantity-format';
+
+export type Verdict = {
+  passes: boolean;
+  /** One sentence: the answer to the study's question. */
+  headline: string;
+  /** Further facts a reader needs with the answer (shutdowns, time above target, periodic state). */
+  notes: string[];
+};
+
+const kelvin = (k: number) => formatQuantity(k, 'K');
+const celsius = (c: number) => formatQuantity(c, '°C');
+const plural = (n: number, one: string, many: string) => `${n} ${n === 1 ? one : many}`;
+
+function failure(d: DeviceResult): string {
+  const target =
+    d.marginToTargetK < 0
+      ? `exceeds its ${celsius(d.targetC)} target by ${kelvin(-d.marginToTargetK)}`
+      : `reaches its ${celsius(d.targetC)} target`;
+  const max = d.marginToMaxK < 0 ? ` and its ${celsius(d.tjMaxC)} Tj,max by ${kelvin(-d.marginToMaxK)}` : '';
+  return `${d.id} ${target}${max} at ${formatDuration(d.peakTimeS)}`;
+}
+
+/**
+ * The plain-language answer: the margin at the worst point when every junction stays below
+ * its target, otherwise each device that does not, by how much and when.
+ */
+export function studyVerdict(result: StudyResult): Verdict {
+  const devices = Object.values(result.devices);
+  const notes: string[] = [];
+  let headline: string;
+  if (result.meetsTarget) {
+    const worst = result.devices[result.worst.device];
+    const target = worst ? ` to the ${celsius(worst.targetC)} target` : '';
+    headline = `Passes: ${kelvin(result.worst.marginToTargetK)} margin${target} at the worst point, ${result.worst.device} at ${formatDuration(result.worst.timeS)}`;
+  } else {
+    const failing = devices.filter((d) => d.marginToTargetK <= 0).sort((a, b) => a.marginToTargetK - b.marginToTargetK);
+    headline = `Fails: ${failing.map(failure).join('; ')}`;
+  }
+  for (const d of devices) {
+    if (d.timeAboveTargetS > 0) notes.push(`${d.id} spends ${formatDuration(d.timeAboveTargetS)} at or above its target.`);
+    if (d.shutdowns > 0) notes.push(`${d.id} trips its thermal shutdown ${plural(d.shutdowns, 'time', 'times')}: the output stops until the junction cools.`);
+  }
+  const periodic = result.solver.periodic;
+  if (periodic) {
+    notes.push(
+      periodic.converged
+        ? `Periodic steady state: the profile repeated until each period starts where the last one did (${plural(periodic.iterations, 'iteration', 'iterations')}).`
+        : `The periodic state did not settle (last change ${formatNumber(periodic.residualK)} K).`,
+    );
+  }
+  return { passes: result.meetsTarget, headline, notes };
+}
