@@ -9,6 +9,7 @@ import { readCsv } from './csv/read-csv';
 import { writeCsv } from './csv/write-csv';
 import { membershipIn, requireRole } from './permissions';
 import { EDITOR_ROLES, teamForNewStudy } from './studies-service';
+import { typeErrors } from '../validate';
 
 /** What differs between one team catalogue and another (heatsinks, interface materials). */
 export type CatalogueKind<V> = {
@@ -46,6 +47,8 @@ export function catalogueService<V>(kind: CatalogueKind<V>) {
   }
 
   function validate(input: unknown, path = ''): Record<string, unknown> {
+    const wrong = typeErrors(kind.schema, input);
+    if (wrong.length) throw AppError.badRequest(wrong.map((w) => `${path}${w.path}: ${w.message}`).join('; '), wrong.map((w) => ({ ...w, path: `${path}${w.path}` })));
     try {
       return kind.schema.validateSync(input, { abortEarly: false }) as Record<string, unknown>;
     } catch (err) {
