@@ -1,4 +1,3 @@
-import request from 'supertest';
 import { createTestApp, makeStudy, makeTeam, makeUser, signedIn } from './test-app';
 
 /**
