@@ -1,0 +1,25 @@
+/** Heatsinks: behaviour models, required Rθsa, ranking on the real profile, sinks from their geometry. */
+export * from './constants';
+export { SINK_MATERIALS, SINK_MATERIAL_NAMES, capacityFromMass, capacityFromVolume, massFromVolume } from './materials';
+export type { SinkMaterial } from './materials';
+export { AIR_300K, filmTemperatureK, idealGasExpansion } from './air';
+export type { AirProperties } from './air';
+export { radiationCoefficient } from './radiation';
+export { LAMINAR_EXPONENT, naturalConvectionRsa, naturalConvectionSteady } from './natural-convection';
+export { forcedAirRsa, checkAirPoints } from './forced-air';
+export type { AirPoint, CurveRange } from './forced-air';
+export { requiredRsa } from './required-rsa';
+export type { RequiredRsa, SteadyDevice } from './required-rsa';
+export { checkCandidate, checkCandidates } from './candidate';
+export type { SinkCandidate, NaturalRating, CheckedCandidate } from './candidate';
+export { prepareRanking } from './ranking-setup';
+export type { RankingSetup, RankingDevice, RankingSegment, PreparedRanking } from './ranking-setup';
+export { rankSinks, rankPrepared, rankScenarios, SORT_KEYS } from './rank-sinks';
+export type { RankingOptions, RankingResult, CandidateResult, DevicePeak, SortKey } from './rank-sinks';
+export type { SteadyRequirement } from './steady-answer';
+export { scanProfile } from './scan-profile';
+export type { ScanProfile } from './scan-profile';
+export { scanPeaks } from './peak-scan';
+export type { ScanResult } from './peak-scan';
+export { createScanWorkspace } from './scan-workspace';
+export type { ScanWorkspace } from './scan-workspace';
