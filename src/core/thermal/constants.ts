@@ -27,8 +27,14 @@ export const FOSTER_TAU_MERGE_REL_TOL = 1e-12;
 /** Lanczos stops (the ladder is complete) when a new direction is this small, relative. */
 export const LANCZOS_BREAKDOWN_REL_TOL = 1e-13;
 
-/** Recent input vectors and durations whose x∞ and e^(−λh) runProfile keeps. */
-export const PROFILE_CACHE_SIZE = 4;
+/** Slots (a power of two) of runProfile's caches of x∞ per input vector and e^(−λh) per duration. */
+export const PROFILE_CACHE_SIZE = 64;
 
 /** Modal rates within this fraction of their cluster's slowest are bounded together. */
 export const BOUND_CLUSTER_REL = 0.01;
+
+/**
+ * When (λ_k − λ_(k−1)) h is at most this, runProfile derives e^(−λ_k h) from its neighbour's
+ * by a four-term Taylor factor; the first neglected term, δ⁴/24, is below 1e−21.
+ */
+export const NEAR_RATE_STEP = 1e-5;

@@ -1,11 +1,12 @@
-import { PEAK_SEARCH_ABS_TOL, PROFILE_CACHE_SIZE } from './constants';
+import { NEAR_RATE_STEP, PEAK_SEARCH_ABS_TOL, PROFILE_CACHE_SIZE } from './constants';
 import type { ExpSumWorkspace } from './exp-sum-roots';
 import { interiorPeak } from './interior-peak';
 import { clusterGaps, type ModeClusters } from './mode-clusters';
 
 /**
  * The segment loop, on typed arrays only so that it stays monomorphic. Cache slots hold
- * x∞ (and each watched node's a_0) per recent input vector, e^(−λh) per recent duration.
+ * x∞ (and each watched node's a_0) per input vector, e^(−λh) per duration, so a repeating
+ * pattern of up to about PROFILE_CACHE_SIZE distinct segments computes each only once.
  */
 export function runSegments(
   durations: Float64Array,
@@ -27,6 +28,7 @@ export function runSegments(
   // Module bindings read through getters once compiled to CommonJS: keep locals.
   const C = PROFILE_CACHE_SIZE;
   const tol = PEAK_SEARCH_ABS_TOL;
+  const nearStep = NEAR_RATE_STEP;
   const cacheU = new Float64Array(C * q).fill(NaN);
   const cacheXInf = new Float64Array(C * n);
   const cacheA0 = new Float64Array(C * nw);
@@ -40,43 +42,40 @@ export function runSegments(
   const devEnd = new Float64Array(n);
   const moveAbs = new Float64Array(n);
   const watchAbs = watchRows.map(Math.abs);
-  let nextU = 0;
-  let nextH = 0;
+  // Direct-mapped caches indexed by a hash of the raw bits of u and h.
+  const durationBits = new Uint32Array(durations.buffer, durations.byteOffset, 2 * durations.length);
+  const inputBits = new Uint32Array(inputs.buffer, inputs.byteOffset, 2 * inputs.length);
+  const shift = 32 - Math.log2(C);
   let slotU = -1;
   let slotH = -1;
   let t = 0;
   for (let s = 0; s < durations.length; s++) {
     const row = s * q;
-    // Input cache: same slot as last segment is the common case.
+    // Same inputs as the last segment is the common case.
     if (slotU < 0 || !sameRow(cacheU, slotU * q, inputs, row, q)) {
-      slotU = -1;
-      for (let c = 0; c < C; c++) {
-        if (sameRow(cacheU, c * q, inputs, row, q)) {
-          slotU = c;
-          break;
-        }
-      }
-      if (slotU < 0) {
-        slotU = nextU;
-        nextU = (nextU + 1) % C;
+      let key = 0;
+      for (let j = 0; j < q; j++) key = Math.imul(key ^ inputBits[2 * (row + j)] ^ Math.imul(inputBits[2 * (row + j) + 1], 0x85ebca6b), 0x9e3779b1);
+      slotU = key >>> shift;
+      if (!sameRow(cacheU, slotU * q, inputs, row, q)) {
         fillInputSlot(slotU, inputs, row, q, n, nw, columns, watchSteady, cacheU, cacheXInf, cacheA0);
       }
     }
     const h = durations[s];
     if (h > 0) {
       if (slotH < 0 || cacheH[slotH] !== h) {
-        slotH = -1;
-        for (let c = 0; c < C; c++) {
-          if (cacheH[c] === h) {
-            slotH = c;
-            break;
-          }
-        }
-        if (slotH < 0) {
-          slotH = nextH;
-          nextH = (nextH + 1) % C;
+        slotH = Math.imul(durationBits[2 * s] ^ Math.imul(durationBits[2 * s + 1], 0x85ebca6b), 0x9e3779b1) >>> shift;
+        if (cacheH[slotH] !== h) {
           cacheH[slotH] = h;
-          for (let k = 0; k < n; k++) cacheDecay[slotH * n + k] = Math.exp(-rates[k] * h);
+          const slot = slotH * n;
+          for (let k = 0; k < n; k++) {
+            // A near-equal rate (a symmetric pair of devices) reuses its neighbour's exp:
+            // e^(−δ) by four Taylor terms is exact to rounding for δ ≤ NEAR_RATE_STEP.
+            const delta = k > 0 ? (rates[k] - rates[k - 1]) * h : Infinity;
+            cacheDecay[slot + k] =
+              delta <= nearStep
+                ? cacheDecay[slot + k - 1] * (1 - delta * (1 - delta * (0.5 - delta / 6)))
+                : Math.exp(-rates[k] * h);
+          }
           gapReady[slotH] = 0;
         }
       }
@@ -89,7 +88,7 @@ export function runSegments(
         const de = d * cacheDecay[db + k];
         dev[k] = d;
         devEnd[k] = de;
-        moveAbs[k] = d > de ? d - de : de - d;
+        moveAbs[k] = Math.abs(d - de);
         x[k] = xi + de;
       }
       for (let w = 0; w < nw; w++) {
@@ -214,8 +213,9 @@ function fillInputSlot(
 ): void {
   const xb = slot * n;
   for (let j = 0; j < q; j++) cacheU[slot * q + j] = inputs[row + j];
-  for (let k = 0; k < n; k++) cacheXInf[xb + k] = 0;
-  for (let j = 0; j < q; j++) {
+  const u0 = inputs[row];
+  for (let k = 0; k < n; k++) cacheXInf[xb + k] = columns[k] * u0;
+  for (let j = 1; j < q; j++) {
     const uj = inputs[row + j];
     if (uj === 0) continue;
     for (let k = 0; k < n; k++) cacheXInf[xb + k] += columns[j * n + k] * uj;
