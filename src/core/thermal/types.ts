@@ -77,7 +77,7 @@ export type ModalModel = {
   };
 };
 
-/** A long piecewise-constant profile in flat arrays (the fast path). */
+/** A long piecewise-constant profile in flat arrays (the fast path; Float64Array avoids a copy). */
 export type Profile = {
   /** Segment lengths, s (each ≥ 0 and finite). */
   durations: ArrayLike<number>;
