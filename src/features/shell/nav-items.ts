@@ -1,11 +1,14 @@
 import type { IconName } from '@/components/ui';
+import type { Role } from '@/features/auth/types';
 
 export type NavItem = {
   label: string;
-  href: '/' | '/account';
+  href: '/' | '/team' | '/outbox' | '/activity' | '/account';
   icon: IconName;
   /** Whether the item is the current section for this pathname. */
   matches: (pathname: string) => boolean;
+  /** Shown only to owners of the current team. */
+  ownerOnly?: boolean;
 };
 
 /** Sections of the workspace. Only screens that exist are listed. */
@@ -17,9 +20,34 @@ export const NAV_ITEMS: readonly NavItem[] = [
     matches: (pathname) => pathname === '/' || pathname.startsWith('/studies'),
   },
   {
+    label: 'Team',
+    href: '/team',
+    icon: 'team',
+    matches: (pathname) => pathname.startsWith('/team'),
+  },
+  {
+    label: 'Outbox',
+    href: '/outbox',
+    icon: 'outbox',
+    matches: (pathname) => pathname.startsWith('/outbox'),
+    ownerOnly: true,
+  },
+  {
+    label: 'Activity',
+    href: '/activity',
+    icon: 'activity',
+    matches: (pathname) => pathname.startsWith('/activity'),
+    ownerOnly: true,
+  },
+  {
     label: 'Account',
     href: '/account',
     icon: 'account',
     matches: (pathname) => pathname.startsWith('/account'),
   },
 ];
+
+/** The sections a member with this role in the current team sees. */
+export function navItemsFor(role: Role | undefined): NavItem[] {
+  return NAV_ITEMS.filter((item) => !item.ownerOnly || role === 'owner');
+}

@@ -29,7 +29,7 @@ export function WorkspaceShell({ session, children }: WorkspaceShellProps) {
   }
   return (
     <View style={styles.phone}>
-      <TopBar teamName={session.memberships[0]?.teamName} />
+      <TopBar />
       <View role="main" style={styles.content}>
         {children}
       </View>

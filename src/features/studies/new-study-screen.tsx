@@ -3,6 +3,7 @@ import { useRouter } from 'expo-router';
 import { Card, EmptyState, Page, Text } from '@/components/ui';
 import { useSignedInSession } from '@/features/auth/api';
 import { teamsWhereCanCreate } from '@/features/auth/roles';
+import { useCurrentTeam } from '@/features/team/current-team';
 
 import { BackLink } from './components/back-link';
 import { NewStudyForm } from './components/new-study-form';
@@ -11,6 +12,7 @@ export function NewStudyScreen() {
   const router = useRouter();
   const session = useSignedInSession();
   const teams = teamsWhereCanCreate(session.memberships);
+  const { team, selectTeam } = useCurrentTeam();
 
   return (
     <Page width="form">
@@ -28,7 +30,12 @@ export function NewStudyScreen() {
           </Text>
           <NewStudyForm
             teams={teams}
-            onCreated={(study) => router.replace(`/studies/${study.id}`)}
+            initialTeamId={team?.teamId}
+            onCreated={(study) => {
+              // Back in the list, the new study's team is the one shown.
+              selectTeam(study.teamId);
+              router.replace(`/studies/${study.id}`);
+            }}
             onCancel={() => router.replace('/')}
           />
         </Card>

@@ -5,8 +5,8 @@ import { StyleSheet, View } from 'react-native';
 import { errorMessage } from '@/api';
 import { Button, EmptyState, ErrorState, LoadingState, Page, Text, useIsWide } from '@/components/ui';
 import { spacing } from '@/constants/theme';
-import { useSignedInSession } from '@/features/auth/api';
 import { teamsWhereCanCreate } from '@/features/auth/roles';
+import { useCurrentTeam } from '@/features/team/current-team';
 
 import { useStudies } from './api';
 import { StudyCard } from './components/study-card';
@@ -17,16 +17,21 @@ import { DEFAULT_SORT, nextSort, queryStudies, type StatusFilter, type StudySort
 export function StudiesScreen() {
   const router = useRouter();
   const wide = useIsWide();
-  const session = useSignedInSession();
-  const canCreate = teamsWhereCanCreate(session.memberships).length > 0;
+  const { team } = useCurrentTeam();
+  const canCreate = team !== null && teamsWhereCanCreate([team]).length > 0;
   const studies = useStudies();
+  // The list shows the team picked in the team switcher.
+  const teamStudies = useMemo(
+    () => studies.data?.filter((study) => !team || study.teamId === team.teamId),
+    [studies.data, team],
+  );
 
   const [search, setSearch] = useState('');
   const [status, setStatus] = useState<StatusFilter>('all');
   const [sort, setSort] = useState<StudySort>(DEFAULT_SORT);
   const shown = useMemo(
-    () => queryStudies(studies.data ?? [], search, status, sort),
-    [studies.data, search, status, sort],
+    () => queryStudies(teamStudies ?? [], search, status, sort),
+    [teamStudies, search, status, sort],
   );
 
   const newStudy = canCreate ? <Button label="New study" onPress={() => router.push('/studies/new')} /> : null;
@@ -37,8 +42,8 @@ export function StudiesScreen() {
         <View style={styles.heading}>
           <Text variant="title">Studies</Text>
           <Text tone="muted">
-            {studies.data
-              ? `${studies.data.length} ${studies.data.length === 1 ? 'study' : 'studies'} in your teams`
+            {teamStudies
+              ? `${teamStudies.length} ${teamStudies.length === 1 ? 'study' : 'studies'} in ${team?.teamName ?? 'your teams'}`
               : 'Design questions your teams are working on'}
           </Text>
         </View>
@@ -54,7 +59,7 @@ export function StudiesScreen() {
           onRetry={() => studies.refetch()}
           retrying={studies.isFetching}
         />
-      ) : studies.data.length === 0 ? (
+      ) : teamStudies?.length === 0 ? (
         <EmptyState
           title="No studies yet"
           message={

@@ -4,16 +4,18 @@ import { useSafeAreaInsets } from 'react-native-safe-area-context';
 
 import { Icon, PressableLink } from '@/components/ui';
 import { color, fontFamily, fontSize, size, spacing } from '@/constants/theme';
+import { useCurrentTeam } from '@/features/team/current-team';
 
-import { NAV_ITEMS } from '../nav-items';
+import { navItemsFor } from '../nav-items';
 
 /** Tab bar of the phone layout. */
 export function BottomNav() {
   const pathname = usePathname();
   const insets = useSafeAreaInsets();
+  const { team } = useCurrentTeam();
   return (
     <View role="navigation" aria-label="Workspace" style={[styles.bar, { paddingBottom: insets.bottom }]}>
-      {NAV_ITEMS.map((item) => {
+      {navItemsFor(team?.role).map((item) => {
         const active = item.matches(pathname);
         const tint = active ? color.accent : color.inkFaint;
         return (

@@ -4,10 +4,11 @@ import { useSafeAreaInsets } from 'react-native-safe-area-context';
 
 import { BrandMark, Icon, PressableLink } from '@/components/ui';
 import { color, fontFamily, fontSize, radius, size, spacing } from '@/constants/theme';
-import { ROLE_LABELS } from '@/features/auth/roles';
 import type { Session } from '@/features/auth/types';
+import { TeamSwitcher } from '@/features/team/components/team-switcher';
+import { useCurrentTeam } from '@/features/team/current-team';
 
-import { NAV_ITEMS } from '../nav-items';
+import { navItemsFor } from '../nav-items';
 
 export type SidebarProps = { session: Session; onSignOut: () => void; signingOut: boolean };
 
@@ -15,7 +16,7 @@ export type SidebarProps = { session: Session; onSignOut: () => void; signingOut
 export function Sidebar({ session, onSignOut, signingOut }: SidebarProps) {
   const pathname = usePathname();
   const insets = useSafeAreaInsets();
-  const team = session.memberships[0];
+  const { team } = useCurrentTeam();
   return (
     <View style={[styles.sidebar, { paddingTop: insets.top + spacing.xl, paddingBottom: insets.bottom + spacing.lg }]}>
       <View style={styles.brand}>
@@ -23,7 +24,7 @@ export function Sidebar({ session, onSignOut, signingOut }: SidebarProps) {
         <NativeText style={styles.brandName}>Junctura</NativeText>
       </View>
       <View role="navigation" aria-label="Workspace" style={styles.nav}>
-        {NAV_ITEMS.map((item) => {
+        {navItemsFor(team?.role).map((item) => {
           const active = item.matches(pathname);
           return (
             <PressableLink
@@ -45,11 +46,7 @@ export function Sidebar({ session, onSignOut, signingOut }: SidebarProps) {
         <NativeText style={styles.userMeta} numberOfLines={1}>
           {session.user.email}
         </NativeText>
-        {team ? (
-          <NativeText style={styles.userMeta} numberOfLines={2}>
-            {team.teamName} · {ROLE_LABELS[team.role]}
-          </NativeText>
-        ) : null}
+        <TeamSwitcher tone="dark" />
         <Pressable
           role="button"
           onPress={onSignOut}

@@ -3,11 +3,10 @@ import { useSafeAreaInsets } from 'react-native-safe-area-context';
 
 import { BrandMark, Text } from '@/components/ui';
 import { color, spacing } from '@/constants/theme';
-
-export type TopBarProps = { teamName?: string };
+import { TeamSwitcher } from '@/features/team/components/team-switcher';
 
 /** Slim header of the phone layout: product mark and the current team. */
-export function TopBar({ teamName }: TopBarProps) {
+export function TopBar() {
   const insets = useSafeAreaInsets();
   return (
     <View role="banner" style={[styles.bar, { paddingTop: insets.top + spacing.sm }]}>
@@ -15,11 +14,9 @@ export function TopBar({ teamName }: TopBarProps) {
         <BrandMark size={22} />
         <Text variant="bodyStrong">Junctura</Text>
       </View>
-      {teamName ? (
-        <Text variant="caption" tone="muted" numberOfLines={1} style={styles.team}>
-          {teamName}
-        </Text>
-      ) : null}
+      <View style={styles.team}>
+        <TeamSwitcher tone="light" />
+      </View>
     </View>
   );
 }
@@ -37,5 +34,5 @@ const styles = StyleSheet.create({
     borderBottomColor: color.border,
   },
   brand: { flexDirection: 'row', alignItems: 'center', gap: spacing.sm },
-  team: { flexShrink: 1, textAlign: 'right' },
+  team: { flexShrink: 1, alignItems: 'flex-end' },
 });

@@ -14,18 +14,24 @@ import { TeamPicker } from './team-picker';
 
 export type NewStudyFormProps = {
   teams: readonly Membership[];
+  /** Preselected team (the current one), when it is among `teams`. */
+  initialTeamId?: number;
   onCreated: (study: Study) => void;
   onCancel: () => void;
 };
 
 type Values = { title: string; description: string; teamId: number };
 
-export function NewStudyForm({ teams, onCreated, onCancel }: NewStudyFormProps) {
+export function NewStudyForm({ teams, initialTeamId, onCreated, onCancel }: NewStudyFormProps) {
   const create = useCreateStudy();
   const [serverError, setServerError] = useState<string | null>(null);
 
   const form = useFormik<Values>({
-    initialValues: { title: '', description: '', teamId: teams[0].teamId },
+    initialValues: {
+      title: '',
+      description: '',
+      teamId: teams.find((team) => team.teamId === initialTeamId)?.teamId ?? teams[0].teamId,
+    },
     validationSchema: studyCreateSchema,
     onSubmit: async (values, helpers) => {
       setServerError(null);

@@ -1,0 +1,3 @@
+import { TeamScreen } from '@/features/team/team-screen';
+
+export default TeamScreen;

@@ -1,0 +1,76 @@
+import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
+
+import { api } from '@/api';
+import { sessionKey } from '@/features/auth/api';
+import type { Role } from '@/features/auth/types';
+import type { InvitationInput } from '@/validation';
+
+import type { Member, PendingInvitation } from './types';
+
+export const membersKey = (teamId: number) => ['teams', teamId, 'members'] as const;
+export const invitationsKey = (teamId: number) => ['teams', teamId, 'invitations'] as const;
+
+const teamPath = (teamId: number) => `/teams/${encodeURIComponent(teamId)}`;
+
+export function useMembers(teamId: number, enabled = true) {
+  return useQuery({
+    queryKey: membersKey(teamId),
+    queryFn: async () => (await api.get<{ members: Member[] }>(`${teamPath(teamId)}/members`)).data.members,
+    enabled,
+  });
+}
+
+/** Pending invitations; only owners may read them, so the query waits until `enabled`. */
+export function useInvitations(teamId: number, enabled: boolean) {
+  return useQuery({
+    queryKey: invitationsKey(teamId),
+    queryFn: async () =>
+      (await api.get<{ invitations: PendingInvitation[] }>(`${teamPath(teamId)}/invitations`)).data.invitations,
+    enabled,
+  });
+}
+
+function useTeamMutation<TInput, TResult>(teamId: number, request: (input: TInput) => Promise<TResult>, alsoSession = false) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: request,
+    // Everything cached under the team (members, invitations, activity) may have changed.
+    onSuccess: async () => {
+      await Promise.all([
+        queryClient.invalidateQueries({ queryKey: ['teams', teamId] }),
+        // The signed-in user's own role may have changed.
+        alsoSession ? queryClient.invalidateQueries({ queryKey: sessionKey }) : undefined,
+      ]);
+    },
+  });
+}
+
+export function useChangeRole(teamId: number) {
+  return useTeamMutation(
+    teamId,
+    async ({ userId, role }: { userId: number; role: Role }) =>
+      api.patch(`${teamPath(teamId)}/members/${encodeURIComponent(userId)}`, { role }),
+    true,
+  );
+}
+
+export function useRemoveMember(teamId: number) {
+  return useTeamMutation(
+    teamId,
+    async (userId: number) => api.delete(`${teamPath(teamId)}/members/${encodeURIComponent(userId)}`),
+    true,
+  );
+}
+
+export function useInvite(teamId: number) {
+  return useTeamMutation(teamId, async (input: InvitationInput) => {
+    const { data } = await api.post<{ invitation: PendingInvitation }>(`${teamPath(teamId)}/invitations`, input);
+    return data.invitation;
+  });
+}
+
+export function useRevokeInvitation(teamId: number) {
+  return useTeamMutation(teamId, async (invitationId: number) =>
+    api.delete(`${teamPath(teamId)}/invitations/${encodeURIComponent(invitationId)}`),
+  );
+}
