@@ -1,0 +1,3 @@
+import { ActivityScreen } from '@/features/activity/activity-screen';
+
+export default ActivityScreen;
