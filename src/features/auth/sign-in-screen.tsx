@@ -65,6 +65,11 @@ export function SignInScreen() {
       </View>
       {serverError ? <InlineAlert message={serverError} /> : null}
       <Button label="Sign in" onPress={() => form.handleSubmit()} busy={form.isSubmitting} />
+      <Link href="/forgot-password" style={styles.link}>
+        <Text tone="accent" variant="label">
+          Forgot password?
+        </Text>
+      </Link>
       <View style={styles.switch}>
         <Text tone="muted">New to Junctura?</Text>
         <Link href="/sign-up" style={styles.link}>

@@ -1,0 +1,3 @@
+import { ForgotPasswordScreen } from '@/features/password-reset/forgot-password-screen';
+
+export default ForgotPasswordScreen;
