@@ -3,6 +3,9 @@ import { StyleSheet, View } from 'react-native';
 import { errorMessage, errorStatus } from '@/api';
 import { Card, EmptyState, ErrorState, LoadingState, Page, Text, useIsWide } from '@/components/ui';
 import { spacing } from '@/constants/theme';
+import { CommentsPanel } from '@/features/comments/comments-panel';
+import { ReviewPanel } from '@/features/review/review-panel';
+import { HistoryPanel } from '@/features/revisions/history-panel';
 import { StudyResults } from '@/features/results/study-results';
 
 import { useStudy } from './api';
@@ -47,12 +50,15 @@ export function StudyScreen({ id }: StudyScreenProps) {
           <Text variant={wide ? 'display' : 'title'}>{data.title}</Text>
         </View>
         <StudyFacts study={data} />
+        <ReviewPanel study={data} />
         <Card>
           <Text variant="heading">Description</Text>
           <Text tone={data.description ? 'default' : 'muted'}>{data.description || 'No description.'}</Text>
         </Card>
         <StudyResults document={data.document} />
         <StudyInputs document={data.document} />
+        <CommentsPanel study={data} />
+        <HistoryPanel study={data} />
         <EstimateCaution />
       </>
     );

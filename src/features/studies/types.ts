@@ -18,5 +18,8 @@ export type StudySummary = {
   updatedAt: string;
 };
 
+/** The approval in force: which revision, by whom, when (only while the study is approved). */
+export type Approval = { revision: number; reviewer: StudyAuthor | null; at: string };
+
 /** Body of `GET /api/studies/:id`: the summary plus the saved design document. */
-export type Study = StudySummary & { document: unknown };
+export type Study = StudySummary & { document: unknown; approval?: Approval | null };
