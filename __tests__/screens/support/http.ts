@@ -1,6 +1,6 @@
 import { AxiosError, AxiosHeaders, type AxiosResponse, type InternalAxiosRequestConfig } from 'axios';
 
-type Method = 'get' | 'post' | 'delete';
+type Method = 'get' | 'post' | 'put' | 'patch' | 'delete';
 type Handler = (body?: unknown) => Promise<unknown>;
 
 /** A successful axios-style response with the given body. */
@@ -20,11 +20,12 @@ export function httpError(status: number, data: unknown): Promise<never> {
  * An unexpected call fails the test loudly instead of hanging.
  */
 export function routeApi(
-  api: Record<Method, jest.Mock>,
+  api: Partial<Record<Method, jest.Mock>>,
   handlers: Record<string, Handler>,
 ): void {
-  for (const method of ['get', 'post', 'delete'] as const) {
-    api[method].mockImplementation((url: string, body?: unknown) => {
+  for (const method of ['get', 'post', 'put', 'patch', 'delete'] as const) {
+    // Mocks without put or patch keep working for screens that never send them.
+    api[method]?.mockImplementation((url: string, body?: unknown) => {
       const handler = handlers[`${method.toUpperCase()} ${url}`];
       if (!handler) return Promise.reject(new Error(`Unexpected request ${method.toUpperCase()} ${url}`));
       return handler(body);

@@ -5,13 +5,20 @@ import { createQueryClient } from '@/api';
 import { AppProviders } from '@/features/shell/app-providers';
 
 import AuthLayout from '../../../app/(auth)/_layout';
+import ForgotPasswordRoute from '../../../app/(auth)/forgot-password';
 import SignInRoute from '../../../app/(auth)/sign-in';
 import SignUpRoute from '../../../app/(auth)/sign-up';
 import WorkspaceLayout from '../../../app/(workspace)/_layout';
 import AccountRoute from '../../../app/(workspace)/account';
+import ActivityRoute from '../../../app/(workspace)/activity';
 import StudiesRoute from '../../../app/(workspace)/index';
+import OutboxRoute from '../../../app/(workspace)/outbox';
 import StudyRoute from '../../../app/(workspace)/studies/[id]';
+import RevisionRoute from '../../../app/(workspace)/studies/[id]/revisions/[number]';
 import NewStudyRoute from '../../../app/(workspace)/studies/new';
+import TeamRoute from '../../../app/(workspace)/team';
+import InvitationRoute from '../../../app/invitations/[token]';
+import ResetPasswordRoute from '../../../app/reset-password/[token]';
 
 /**
  * Renders the real route tree from a URL. The root layout is replaced only to
@@ -35,11 +42,18 @@ export function renderApp(initialUrl: string) {
       '(auth)/_layout': AuthLayout,
       '(auth)/sign-in': SignInRoute,
       '(auth)/sign-up': SignUpRoute,
+      '(auth)/forgot-password': ForgotPasswordRoute,
       '(workspace)/_layout': WorkspaceLayout,
       '(workspace)/index': StudiesRoute,
       '(workspace)/account': AccountRoute,
       '(workspace)/studies/new': NewStudyRoute,
       '(workspace)/studies/[id]': StudyRoute,
+      '(workspace)/studies/[id]/revisions/[number]': RevisionRoute,
+      '(workspace)/team': TeamRoute,
+      '(workspace)/outbox': OutboxRoute,
+      '(workspace)/activity': ActivityRoute,
+      'invitations/[token]': InvitationRoute,
+      'reset-password/[token]': ResetPasswordRoute,
     },
     { initialUrl },
   );
