@@ -107,7 +107,7 @@ describe('study results', () => {
     // Over the 4100 s run the read-out is in minutes: 100 s = 1.67 min, shown to 0.1 min.
     showStudy(lumpedStudy(0, [{ durationS: 100, powerW: { Q1: 0 } }, { durationS: 50, vinV: 12, voutV: 5, iloadA: 2 }]));
 
-    const event = await screen.findByRole('button', { name: /Current limit, Q1 at 100 s/ }, { timeout: 5000 });
+    const event = await screen.findByRole('button', { name: /Current limit, Q1 at 100.0 s/ }, { timeout: 5000 });
     expect(screen.getByText(/1 A delivered of 2 A asked, 7 V across, for 50 s/)).toBeVisible();
 
     fireEvent.press(event);

@@ -13,7 +13,7 @@ import { HeatCurvesReadout } from './heat-curves-readout';
 import { plotFrame, PLOT_MARGIN, tickCounts } from './plot-frame';
 import { extentIn } from './series-sample';
 import { temperatureDomain } from './temperature-axis';
-import { formatTimeAt } from './time-axis';
+import { formatSpan, formatTimeAt } from './time-axis';
 
 export type HeatCurvesChartProps = {
   result: StudyResult;
@@ -129,8 +129,8 @@ export function HeatCurvesChart({ result, cursorS, onCursorChange, onPickTime, h
       <View style={styles.toolbar}>
         <Text variant="caption" tone="muted" style={styles.range}>
           {whole
-            ? `Whole run, ${formatTimeAt(full[1], full[1])}`
-            : `${formatTimeAt(view[0], span)} to ${formatTimeAt(view[1], span)} of ${formatTimeAt(full[1], full[1])}`}
+            ? `Whole run, ${formatSpan(full[1])}`
+            : `${formatTimeAt(view[0], span)} to ${formatTimeAt(view[1], span)} of ${formatSpan(full[1])}`}
         </Text>
         <View style={styles.buttons}>
           <Button label="Zoom in" variant="secondary" style={styles.button} onPress={() => setView(zoomAround(view, full, zoomCentre, ZOOM_STEP))} />

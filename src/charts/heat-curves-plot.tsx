@@ -6,8 +6,9 @@ import { chartColor, color, fontFamily } from '@/constants/theme';
 
 import type { CurveSeries, LimitLine } from './heat-curves-model';
 import type { PlotFrame } from './plot-frame';
+import { LABEL_SIZE, plotLabels } from './plot-labels';
 import { valueAt, visibleRange } from './series-sample';
-import { formatTemperature, temperatureTicks } from './temperature-axis';
+import { temperatureTicks } from './temperature-axis';
 import { timeTicks } from './time-axis';
 
 export type HeatCurvesPlotProps = {
@@ -22,7 +23,6 @@ export type HeatCurvesPlotProps = {
 };
 
 const CLIP_ID = 'heat-curves-clip';
-const LABEL_SIZE = 11;
 
 const Curves = memo(function Curves({ frame, curves }: { frame: PlotFrame; curves: readonly CurveSeries[] }) {
   const paths = useMemo(() => {
@@ -63,6 +63,7 @@ export function HeatCurvesPlot({ frame, curves, limits, tickCount, cursorS, sele
   const temps = temperatureTicks(y.domain() as [number, number], tickCount.y);
   const inView = (t: number) => t >= t0 && t <= t1;
   const cursorX = cursorS !== null && inView(cursorS) ? x(cursorS) : null;
+  const labels = useMemo(() => plotLabels(frame, limits, curves), [frame, limits, curves]);
 
   return (
     <Svg width={frame.width} height={frame.height} role="img" aria-label={label}>
@@ -104,16 +105,6 @@ export function HeatCurvesPlot({ frame, curves, limits, tickCount, cursorS, sele
         return (
           <G key={limit.key}>
             <Line x1={left} x2={right} y1={ly} y2={ly} stroke={limit.style.stroke} strokeWidth={limit.style.width} strokeDasharray={limit.style.dash} />
-            <SvgText
-              x={right - 4}
-              y={limit.kind === 'tjMax' ? ly - 4 : ly + 12}
-              fontSize={LABEL_SIZE}
-              fontFamily={fontFamily.medium}
-              fill={limit.style.stroke}
-              textAnchor="end"
-            >
-              {limit.label}
-            </SvgText>
           </G>
         );
       })}
@@ -131,21 +122,22 @@ export function HeatCurvesPlot({ frame, curves, limits, tickCount, cursorS, sele
               stroke={curve.style.stroke}
               strokeWidth={1.5}
             />
-            {curve.kind === 'junction' ? (
-              <SvgText
-                x={x(curve.peak.timeS)}
-                y={y(curve.peak.valueC) - 8}
-                fontSize={LABEL_SIZE}
-                fontFamily={fontFamily.medium}
-                fill={curve.style.stroke}
-                textAnchor={x(curve.peak.timeS) > right - 40 ? 'end' : x(curve.peak.timeS) < left + 40 ? 'start' : 'middle'}
-              >
-                {formatTemperature(curve.peak.valueC)}
-              </SvgText>
-            ) : null}
           </G>
         ) : null,
       )}
+
+      {labels.map((label) => (
+        <SvgText
+          key={`label-${label.key}`}
+          x={label.box.x}
+          y={label.box.y + label.box.height - 3}
+          fontSize={LABEL_SIZE}
+          fontFamily={fontFamily.medium}
+          fill={label.color}
+        >
+          {label.text}
+        </SvgText>
+      ))}
 
       {cursorX !== null && cursorS !== null ? (
         <G>

@@ -38,3 +38,9 @@ export function formatTimeAt(timeS: number, spanS: number): string {
   const decimals = span > 0 ? Math.max(0, Math.min(6, 2 - Math.floor(Math.log10(span)))) : 0;
   return `${(timeS / unit.seconds).toFixed(decimals)}\u00a0${unit.symbol}`;
 }
+
+/** A length of time in the unit a reader would use, three significant digits: "60 s", "2.67 min". */
+export function formatSpan(spanS: number): string {
+  const unit = timeUnitFor(Math.abs(spanS));
+  return `${Number((spanS / unit.seconds).toPrecision(3))}\u00a0${unit.symbol}`;
+}

@@ -37,3 +37,20 @@ export function eventCountsText(counts: Record<EventKind, number>): string {
     .map((kind) => `${counts[kind]} ${counts[kind] === 1 ? EVENT_LABELS[kind].one : EVENT_LABELS[kind].many}`)
     .join(', ');
 }
+
+/**
+ * An event's time precise enough to tell close events apart: "38.2 s", "13 min 24.7 s",
+ * "2 h 03 min 10 s".
+ */
+export function formatEventTime(timeS: number): string {
+  if (timeS < 1) return `${Number(timeS.toPrecision(3))}\u00a0s`;
+  if (timeS < 120) return `${timeS.toFixed(1)}\u00a0s`;
+  const tenths = Math.round(timeS * 10);
+  const seconds = (tenths % 600) / 10;
+  const minutes = Math.floor(tenths / 600);
+  if (minutes < 120) return `${minutes}\u00a0min ${seconds.toFixed(1)}\u00a0s`;
+  const whole = Math.round(timeS);
+  const mm = String(Math.floor((whole % 3600) / 60)).padStart(2, '0');
+  const ss = String(whole % 60).padStart(2, '0');
+  return `${Math.floor(whole / 3600)}\u00a0h ${mm}\u00a0min ${ss}\u00a0s`;
+}

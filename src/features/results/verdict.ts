@@ -46,7 +46,7 @@ export function studyVerdict(result: StudyResult): Verdict {
   if (periodic) {
     notes.push(
       periodic.converged
-        ? `Periodic steady state: the profile repeated until each period starts where the last one did (${plural(periodic.iterations, 'iteration', 'iterations')}).`
+        ? 'Periodic steady state: the figures are for the profile repeated until every period is the same as the last.'
         : `The periodic state did not settle (last change ${formatNumber(periodic.residualK)} K).`,
     );
   }

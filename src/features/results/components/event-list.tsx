@@ -4,9 +4,8 @@ import { Pressable, StyleSheet, View } from 'react-native';
 import { Button, Text } from '@/components/ui';
 import type { EventKind, StudyEvent } from '@/core/study';
 import { color, radius, spacing } from '@/constants/theme';
-import { formatDuration } from '@/features/studies/quantity-format';
 
-import { eventCountsText, eventText } from '../event-text';
+import { eventCountsText, eventText, formatEventTime } from '../event-text';
 
 /** Events listed before "show all", so a study with hundreds of shutdown cycles stays readable. */
 const FIRST_SHOWN = 12;
@@ -41,12 +40,12 @@ export function EventList({ events, counts, selectedS, onSelect }: EventListProp
               key={`${event.kind}-${event.timeS}-${i}`}
               role="button"
               aria-pressed={selected}
-              accessibilityLabel={`${text.title} at ${formatDuration(event.timeS)}: show on the chart`}
+              accessibilityLabel={`${text.title} at ${formatEventTime(event.timeS)}: show on the chart`}
               onPress={() => onSelect(event.timeS)}
               style={({ pressed }) => [styles.item, selected && styles.selected, pressed && styles.pressed]}
             >
               <Text variant="mono" tone="muted" style={styles.time}>
-                {formatDuration(event.timeS)}
+                {formatEventTime(event.timeS)}
               </Text>
               <View style={styles.body}>
                 <Text variant="bodyStrong">{text.title}</Text>
@@ -84,7 +83,7 @@ const styles = StyleSheet.create({
   },
   selected: { borderColor: color.accent, backgroundColor: color.accentSoft },
   pressed: { backgroundColor: color.surfaceMuted },
-  time: { width: 76, paddingTop: 2 },
+  time: { width: 112, paddingTop: 2 },
   body: { flex: 1, gap: spacing.xxs },
   more: { alignSelf: 'flex-start' },
 });

@@ -1,4 +1,4 @@
-import { ScrollView, StyleSheet, View } from 'react-native';
+import { ScrollView, StyleSheet, View, type StyleProp, type ViewStyle } from 'react-native';
 
 import { Text, useIsWide } from '@/components/ui';
 import { color, radius, spacing } from '@/constants/theme';
@@ -14,9 +14,9 @@ export type ResultTableProps<T> = {
   columns: readonly ResultColumn<T>[];
 };
 
-function Cell({ cell, strong, width }: { cell: ResultCell; strong?: boolean; width?: number }) {
+function Cell({ cell, strong, style }: { cell: ResultCell; strong?: boolean; style: StyleProp<ViewStyle> }) {
   return (
-    <View role="cell" style={[styles.cell, width ? { width } : styles.flex]}>
+    <View role="cell" style={[styles.cell, style]}>
       <Text variant={strong ? 'bodyStrong' : 'body'} tone={cell.tone === 'danger' ? 'danger' : 'default'}>
         {cell.text}
       </Text>
@@ -40,8 +40,8 @@ export function ResultTable<T>({ label, rows, rowKey, columns }: ResultTableProp
     return (
       <View role="table" aria-label={label} style={styles.table}>
         <View role="row" style={[styles.row, styles.header]}>
-          {columns.map((c) => (
-            <View key={c.label} role="columnheader" style={[styles.cell, styles.flex]}>
+          {columns.map((c, k) => (
+            <View key={c.label} role="columnheader" style={[styles.cell, k === 0 ? styles.nameFlex : styles.flex]}>
               <Text variant="label" tone="muted">
                 {c.label}
               </Text>
@@ -51,38 +51,37 @@ export function ResultTable<T>({ label, rows, rowKey, columns }: ResultTableProp
         {rows.map((row, i) => (
           <View key={rowKey(row)} role="row" style={[styles.row, i < rows.length - 1 && styles.divider]}>
             {columns.map((c, k) => (
-              <Cell key={c.label} cell={c.cell(row)} strong={k === 0} />
+              <Cell key={c.label} cell={c.cell(row)} strong={k === 0} style={k === 0 ? styles.nameFlex : styles.flex} />
             ))}
           </View>
         ))}
       </View>
     );
   }
-  const valueWidth = 104;
   return (
     <ScrollView horizontal contentContainerStyle={styles.scroll}>
       <View role="table" aria-label={label} style={styles.table}>
         <View role="row" style={[styles.row, styles.header]}>
-          <View role="columnheader" style={[styles.cell, { width: 128 }]}>
+          <View role="columnheader" style={[styles.cell, styles.sideName]}>
             <Text variant="label" tone="muted">
               {nameColumn.label}
             </Text>
           </View>
           {rows.map((row) => (
-            <View key={rowKey(row)} role="columnheader" style={[styles.cell, { width: valueWidth }]}>
+            <View key={rowKey(row)} role="columnheader" style={[styles.cell, styles.sideValue]}>
               <Text variant="label">{nameColumn.cell(row).text}</Text>
             </View>
           ))}
         </View>
         {valueColumns.map((c, i) => (
           <View key={c.label} role="row" style={[styles.row, i < valueColumns.length - 1 && styles.divider]}>
-            <View role="rowheader" style={[styles.cell, { width: 128 }]}>
+            <View role="rowheader" style={[styles.cell, styles.sideName]}>
               <Text variant="caption" tone="muted">
                 {c.label}
               </Text>
             </View>
             {rows.map((row) => (
-              <Cell key={rowKey(row)} cell={c.cell(row)} width={valueWidth} />
+              <Cell key={rowKey(row)} cell={c.cell(row)} style={styles.sideValue} />
             ))}
           </View>
         ))}
@@ -99,4 +98,8 @@ const styles = StyleSheet.create({
   divider: { borderBottomWidth: 1, borderBottomColor: color.border },
   cell: { paddingHorizontal: spacing.sm, paddingVertical: spacing.xs, gap: spacing.xxs },
   flex: { flex: 1 },
+  nameFlex: { flex: 1.5 },
+  // On its side: a fixed name column, value columns that share the width but scroll past three.
+  sideName: { width: 112 },
+  sideValue: { flex: 1, minWidth: 100 },
 });
