@@ -4,6 +4,12 @@ import type { EventLog } from './event-log';
 import type { PassesRun } from './run-passes';
 import type { DeviceResult, SinkResult, StudyResult } from './result-types';
 import { MAX_LISTED_EVENTS } from './constants';
+import type { SoaTracker } from './soa-tracker';
+import type { RailSelection } from './rail-selection';
+import type { DeviceSoaResult } from './soa-result-types';
+import { deviceSoaResult } from './soa-result';
+import { railPlanResult } from './rail-result';
+import { adjustableResult } from './adjustable-result';
 
 export type AssembleInput = {
   sm: StudyModel;
@@ -15,7 +21,26 @@ export type AssembleInput = {
   periodic?: StudyResult['solver']['periodic'];
   warnings: string[];
   rsaRange?: [number, number][];
+  soa?: SoaTracker | null;
+  rail?: RailSelection | null;
 };
+
+/** SOA results by device id, with a warning line for each failure and each SOA warning. */
+function soaResults(input: AssembleInput): Record<string, DeviceSoaResult> {
+  const out: Record<string, DeviceSoaResult> = {};
+  const tracker = input.soa;
+  if (!tracker) return out;
+  tracker.devices.forEach((d, k) => {
+    const r = deviceSoaResult(input.sm.doc.devices[d], d, tracker.accumulators[k]);
+    out[r.device] = r;
+    const w = r.worst;
+    if (!r.passed && w) {
+      input.warnings.push(`${r.device} leaves its safe operating area: margin ${w.margin.toPrecision(3)} at ${w.timeS} s (${w.vceV.toPrecision(3)} V, ${w.icA.toPrecision(3)} A, ${w.limit} limit).`);
+    }
+    for (const x of r.warnings) input.warnings.push(`${r.device}: ${x.message} (${x.stretches} stretch${x.stretches === 1 ? '' : 'es'}, the first at ${x.firstTimeS} s)`);
+  });
+  return out;
+}
 
 function assertFinite(value: unknown, path: string): void {
   if (typeof value === 'number' && !Number.isFinite(value)) {
@@ -55,6 +80,9 @@ export function assembleResult(input: AssembleInput): StudyResult {
       energyJ: obs.partEnergyJ[i],
       shutdowns: events.trips.get(d.id) ?? 0,
     };
+    if (d.kind) result.kind = d.kind;
+    const adjustable = adjustableResult(doc, i);
+    if (adjustable) result.adjustable = adjustable;
     devices[d.id] = result;
   });
   const eventTotal = Object.values(events.counts).reduce((a, b) => a + b, 0);
@@ -76,6 +104,9 @@ export function assembleResult(input: AssembleInput): StudyResult {
     sinks[s.id] = result;
   });
   const worstDevice = Object.values(devices).reduce((a, b) => (b.marginToTargetK < a.marginToTargetK ? b : a));
+  const soa = soaResults(input);
+  const railPlan = input.rail ? railPlanResult(doc, input.rail, events.counts['tap-change']) : undefined;
+  if (railPlan) input.warnings.push(...railPlan.warnings);
   const result: StudyResult = {
     title: doc.title,
     durationS: duration,
@@ -85,6 +116,8 @@ export function assembleResult(input: AssembleInput): StudyResult {
     sinks,
     worst: { device: worstDevice.id, peakJunctionC: worstDevice.peakJunctionC, marginToTargetK: worstDevice.marginToTargetK, timeS: worstDevice.peakTimeS },
     meetsTarget: Object.values(devices).every((d) => d.marginToTargetK > 0),
+    soa,
+    soaPasses: Object.values(soa).every((r) => r.passed),
     events: events.listed,
     eventCounts: { ...events.counts },
     solver: {
@@ -100,6 +133,7 @@ export function assembleResult(input: AssembleInput): StudyResult {
     result.enclosure = { peakC: obs.peakC[w], peakTimeS: obs.peakTimeS[w] };
   }
   if (input.periodic) result.solver.periodic = input.periodic;
+  if (railPlan) result.railPlan = railPlan;
   assertFinite(result, 'result');
   if (obs.series) result.series = obs.series.build();
   if (obs.rows) {

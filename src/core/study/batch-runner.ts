@@ -4,6 +4,7 @@ import type { EventLog } from './event-log';
 import { boundsFor, notePower, observeStretch, offerPeak, recordRow, sampleState, timeAtOrAbove, type Observer } from './observer';
 import { fedDevices, segmentPower, type SegmentPower } from './segment-power';
 import { logDriveEvents } from './drive-events';
+import type { SoaTracker } from './soa-tracker';
 
 /**
  * Fast path for linear studies (no thermal shutdown, no natural-convection sink): the pieces
@@ -26,7 +27,7 @@ export type BatchRunner = {
   pieces: number;
 };
 
-export function createBatchRunner(sm: StudyModel, observer: Observer | null, events: EventLog | null): BatchRunner {
+export function createBatchRunner(sm: StudyModel, observer: Observer | null, events: EventLog | null, soa: SoaTracker | null = null): BatchRunner {
   const { doc } = sm;
   const model = sm.reference;
   const m = doc.devices.length;
@@ -41,6 +42,7 @@ export function createBatchRunner(sm: StudyModel, observer: Observer | null, eve
   let durations = new Float64Array(1024);
   let inputs = new Float64Array(1024 * q);
   let times = new Float64Array(1024);
+  let segmentOf = new Int32Array(1024);
   let count = 0;
   let bucketOfChunk = -1;
   const self: BatchRunner = { T, addPiece, flush, finish, pieces: 0 };
@@ -68,12 +70,16 @@ export function createBatchRunner(sm: StudyModel, observer: Observer | null, eve
       durations = grow(durations, count * 2);
       inputs = grow(inputs, count * 2 * q);
       times = grow(times, count * 2);
+      const segments = new Int32Array(count * 2);
+      segments.set(segmentOf);
+      segmentOf = segments;
     }
     const p = powerOf(segmentIndex);
     for (let d = 0; d < m; d++) inputs[count * q + d] = p.partPowerW[d] * doc.devices[d].count;
     inputs[count * q + m] = ambientC;
     durations[count] = h;
     times[count] = t0;
+    segmentOf[count] = segmentIndex;
     count++;
     self.pieces++;
     if (observer) notePower(observer, p.partPowerW, h);
@@ -110,8 +116,14 @@ export function createBatchRunner(sm: StudyModel, observer: Observer | null, eve
     const result = runProfile(model, { durations: durations.subarray(0, count), inputs: inputs.subarray(0, count * q) }, {
       initial: T,
       watchNodes: obs ? obs.nodes : [],
-      recordBoundaries: obs?.rows != null,
+      recordBoundaries: obs?.rows != null || soa !== null,
     });
+    if (soa && result.boundaries) {
+      for (let k = 0; k < count; k++) {
+        const u = inputs.subarray(k * q, (k + 1) * q);
+        soa.stretch(model, result.boundaries.subarray(k * N, (k + 1) * N), u, times[k], durations[k], segmentOf[k], powerOf(segmentOf[k]), allOn);
+      }
+    }
     if (obs) {
       if (obs.rows && result.boundaries) {
         for (let k = 1; k < count; k++) {
@@ -136,6 +148,7 @@ export function createBatchRunner(sm: StudyModel, observer: Observer | null, eve
     for (let k = 0; k < count; k++) {
       const u = inputs.subarray(k * q, (k + 1) * q);
       observeStretch(obs, sm, model, T, u, times[k], durations[k], inputs[k * q + m], scratch);
+      soa?.stretch(model, T, u, times[k], durations[k], segmentOf[k], powerOf(segmentOf[k]), allOn);
       advance(model, T, u, durations[k], T);
     }
     count = 0;

@@ -35,3 +35,15 @@ export const MAX_PERIODIC_STRETCHES = 5_000_000;
 
 /** Every node must end at or below this; a higher value means the inputs are not physical. */
 export const MAX_PLAUSIBLE_TEMPERATURE_C = 1e6;
+
+/** SOA: merged operating points held per device while solving (memory bound); the lower-margin half survives a cut. */
+export const MAX_TRACKED_SOA_POINTS = 20_000;
+
+/** SOA: operating points listed per device in the result (the lowest margins, in time order). */
+export const MAX_LISTED_SOA_POINTS = 500;
+
+/** Rail plan: segments of the first pass listed with their tap in the result. */
+export const MAX_LISTED_TAP_SEGMENTS = 2000;
+
+/** Two stretches meet when their ends lie this close (relative to the time), s/s. */
+export const STRETCH_JOIN_REL_TOL = 1e-9;

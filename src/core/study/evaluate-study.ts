@@ -10,6 +10,10 @@ import { makeRunner, runPasses } from './run-passes';
 import { periodicStartState } from './periodic-start-state';
 import { maxDifference } from './periodic';
 import { assembleResult } from './assemble-result';
+import { selectRailTaps, type RailSelection } from './rail-selection';
+import { createSoaTracker } from './soa-tracker';
+import type { EventLog } from './event-log';
+import type { SegmentStart } from './run-passes';
 import { CONVECTION_TOLERANCE, DEFAULT_SERIES_POINTS } from './constants';
 
 export type EvaluateOptions = {
@@ -23,14 +27,24 @@ export type EvaluateOptions = {
   forceEventDriven?: boolean;
 };
 
+/** Logs a tap change where the selection moved at the start of a segment. */
+function tapChangeLogger(rail: RailSelection, events: EventLog): SegmentStart {
+  const name = (k: number) => rail.model.taps[k].name;
+  return (timeS, s, pass) => {
+    const c = rail.changeAt(pass, s);
+    if (c) events.add({ kind: 'tap-change', timeS, from: c.from, to: c.to, fromName: name(c.from), toName: name(c.to), sensedV: c.sensedV });
+  };
+}
+
 /**
- * Solves a study: builds its network (Foster packages as Cauer ladders), turns the profile
- * into constant-input pieces and solves them exactly: the batch path when the study is
- * linear, the event-driven path when a device has thermal shutdown or a sink natural
- * convection. Starts from every node at the first ambient or, with `periodic`, from the
- * periodic steady state.
+ * Solves a study: selects the rail plan's taps over the profile (when it has one), builds
+ * its network (Foster packages as Cauer ladders), turns the profile into constant-input
+ * pieces and solves them exactly: the batch path when the study is linear, the event-driven
+ * path when a device has thermal shutdown or a sink natural convection. Starts from every
+ * node at the first ambient or, with `periodic`, from the periodic steady state. Devices
+ * with an SOA model are checked at every operating point of the solution.
  */
-export function evaluateStudy(doc: StudyDocument, options: EvaluateOptions = {}): StudyResult {
+export function evaluateStudy(written: StudyDocument, options: EvaluateOptions = {}): StudyResult {
   const tolerance = options.convectionTolerance ?? CONVECTION_TOLERANCE;
   if (!(tolerance > 0 && tolerance <= 0.5)) throw new RangeError(`convectionTolerance: must be above 0 and at most 0.5, got ${tolerance}`);
   const seriesPoints = options.seriesPoints ?? DEFAULT_SERIES_POINTS;
@@ -40,6 +54,8 @@ export function evaluateStudy(doc: StudyDocument, options: EvaluateOptions = {})
   const boundaryRows = options.boundaryRows ?? 0;
   if (!(Number.isInteger(boundaryRows) && boundaryRows >= 0)) throw new RangeError(`boundaryRows: must be a whole number ≥ 0, got ${boundaryRows}`);
 
+  const rail = written.railPlan ? selectRailTaps(written) : null;
+  const doc = rail ? rail.doc : written;
   const sm = createStudyModel(doc, tolerance);
   const hasShutdown = doc.devices.some((d) => d.electrical?.thermalShutdown);
   const batch = !hasShutdown && sm.nonLinearSinks.length === 0 && !options.forceEventDriven;
@@ -64,9 +80,11 @@ export function evaluateStudy(doc: StudyDocument, options: EvaluateOptions = {})
 
   const observer = createObserver(sm, { bucketS, bucketCount, series: seriesPoints > 0, maxRows: boundaryRows });
   const events = createEventLog();
-  const runner = makeRunner(sm, batch, observer, events);
+  const soa = createSoaTracker(sm);
+  const runner = makeRunner(sm, batch, observer, events, soa);
   runner.reset(T0, on0);
-  const run = runPasses(doc, runner, ambient, doc.profile.repeat, bucketS, bucketCount);
+  const run = runPasses(doc, runner, ambient, doc.profile.repeat, bucketS, bucketCount, rail ? tapChangeLogger(rail, events) : undefined);
+  soa?.finish(run.endS);
   if (periodic && batch) periodic.residualK = maxDifference(runner.T, T0, sm.dynamicNodes);
 
   return assembleResult({
@@ -79,5 +97,7 @@ export function evaluateStudy(doc: StudyDocument, options: EvaluateOptions = {})
     periodic,
     warnings,
     rsaRange: runner.rsaRange(),
+    soa,
+    rail,
   });
 }

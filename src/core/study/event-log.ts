@@ -15,6 +15,17 @@ export type StudyEvent =
       dropoutV: number;
     }
   | {
+      kind: 'tap-change';
+      timeS: number;
+      /** Taps by index into railPlan.taps (lowest voltage first) and by name. */
+      from: number;
+      to: number;
+      fromName: string;
+      toName: string;
+      /** The sensed voltage that crossed θ ± h/2 (output reached on the old tap, or the set point), V. */
+      sensedV: number;
+    }
+  | {
       kind: 'current-limit';
       timeS: number;
       endS: number;
@@ -27,7 +38,7 @@ export type StudyEvent =
 export type EventKind = StudyEvent['kind'];
 
 export type EventLog = {
-  add(event: StudyEvent): void;
+  add(event: Instant): void;
   /** Adds a state that lasts from timeS to endS, joined to the last one of its kind when it continues it unchanged. */
   addSpan(event: Span): void;
   listed: StudyEvent[];
@@ -37,6 +48,7 @@ export type EventLog = {
 };
 
 type Span = Extract<StudyEvent, { endS: number }>;
+type Instant = Exclude<StudyEvent, Span>;
 
 const sameDevices = (a: string[], b: string[]) => a.length === b.length && a.every((id, i) => id === b[i]);
 
@@ -55,7 +67,7 @@ function continues(a: Span, b: Span): boolean {
 /** Events in time order; after MAX_LISTED_EVENTS only their counts grow. */
 export function createEventLog(limit = MAX_LISTED_EVENTS): EventLog {
   const listed: StudyEvent[] = [];
-  const counts: Record<EventKind, number> = { shutdown: 0, resume: 0, dropout: 0, 'current-limit': 0 };
+  const counts: Record<EventKind, number> = { shutdown: 0, resume: 0, dropout: 0, 'current-limit': 0, 'tap-change': 0 };
   const open: Partial<Record<EventKind, Span>> = {};
   const trips = new Map<string, number>();
   return {

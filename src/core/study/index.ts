@@ -1,9 +1,19 @@
 /** The study document (format "junctura-study" v1) and the pipeline that evaluates it. */
 export * from './types';
 export { parseStudy } from './parse-study';
+export { parsePackage } from './parse-package';
+export { parseElectrical } from './parse-electrical';
+export { parseSoa } from './parse-soa';
+export { parseRailPlan, MAX_MAP_VOUT_STEPS, MAX_MAP_IOUT_STEPS } from './parse-rail-plan';
 export { evaluateStudy } from './evaluate-study';
 export type { EvaluateOptions } from './evaluate-study';
 export type { StudyResult, DeviceResult, SinkResult, PeakRow } from './result-types';
+export type { DeviceSoaResult, SoaPointResult, SoaWarningResult } from './soa-result-types';
+export type { RailPlanResult, RailMapResult, RailMapLayer, RailWorstCases, TapSegment } from './rail-result-types';
+export type { AdjustableResult } from './adjustable-result';
+export type { SoaBoundary, SoaBoundarySegment, SoaLimit, PulseWidth, TransistorKind } from '../soa';
+export type { BestThreshold, CellStatus, TapWorstCase, SensedVoltage } from '../rails';
+export { packageRthKPerW } from './rail-result';
 export type { StudyEvent, EventKind } from './event-log';
 export type { Series } from './series-recorder';
 export type { BoundaryTable } from './boundary-table';

@@ -1,9 +1,28 @@
-import type { Device } from './types';
-import { asObject, fieldPath, onlyKeys, readId, readNumber, readOptionalNumber, readOptionalString } from './field-reader';
+import { DEVICE_KINDS, type Device, type DeviceKind } from './types';
+import { asObject, fieldPath, onlyKeys, rangeFail, readId, readNumber, readOptionalNumber, readOptionalString } from './field-reader';
 import { parsePackage } from './parse-package';
 import { parseElectrical } from './parse-electrical';
+import { parseSoa } from './parse-soa';
 
-const DEVICE_KEYS = ['id', 'name', 'notes', 'tjMaxC', 'sink', 'count', 'package', 'interface', 'electrical'];
+const DEVICE_KEYS = ['id', 'name', 'notes', 'tjMaxC', 'sink', 'count', 'package', 'interface', 'electrical', 'kind', 'partId', 'soa'];
+
+/** `kind` and `partId` (informational), and the SOA model, which must match the kind. */
+function readPart(obj: Record<string, unknown>, path: string, device: Device): void {
+  const kind = readOptionalString(obj, 'kind', path);
+  if (kind !== undefined) {
+    if (!DEVICE_KINDS.includes(kind as DeviceKind)) rangeFail(fieldPath(path, 'kind'), `must be one of ${DEVICE_KINDS.join(', ')}, got ${JSON.stringify(kind)}`);
+    device.kind = kind as DeviceKind;
+  }
+  const partId = readOptionalNumber(obj, 'partId', path, { min: 1, integer: true });
+  if (partId !== undefined) device.partId = partId;
+  if (obj.soa === undefined) return;
+  const soaPath = fieldPath(path, 'soa');
+  if (device.kind === 'regulator') rangeFail(soaPath, 'an integrated regulator has no SOA model here (its current limit and thermal shutdown protect it); remove soa or change kind');
+  device.soa = parseSoa(obj.soa, soaPath);
+  if (device.kind !== undefined && device.soa.transistor !== device.kind) {
+    rangeFail(fieldPath(soaPath, 'transistor'), `must match the device kind ${JSON.stringify(device.kind)}, got ${JSON.stringify(device.soa.transistor)}`);
+  }
+}
 
 /** Reads `devices[i]`; the sink reference is checked by the caller, which knows the sinks. */
 export function parseDevice(value: unknown, path: string): Device {
@@ -25,5 +44,6 @@ export function parseDevice(value: unknown, path: string): Device {
   const name = readOptionalString(obj, 'name', path);
   if (name !== undefined) device.name = name;
   if (obj.electrical !== undefined) device.electrical = parseElectrical(obj.electrical, fieldPath(path, 'electrical'));
+  readPart(obj, path, device);
   return device;
 }

@@ -1,4 +1,5 @@
-import type { Device, ElectricalDrive, Profile, ProfileSegment } from './types';
+import type { Device, Profile, ProfileSegment } from './types';
+import { adjustableOutputV } from '../rails';
 import {
   asArray,
   asObject,
@@ -19,7 +20,7 @@ const SEGMENT_KEYS = ['durationS', 'powerW', 'vinV', 'voutV', 'iloadA', 'devices
 const GROUP_KEYS = ['repeat', 'segments', 'label'];
 const MAX_GROUP_DEPTH = 8;
 
-type Context = { devices: Map<string, Device>; out: ProfileSegment[] };
+type Context = { devices: Map<string, Device>; out: ProfileSegment[]; railPlan: boolean };
 
 function parsePower(value: unknown, path: string, ctx: Context): Record<string, number> {
   const obj = asObject(value, path);
@@ -31,37 +32,54 @@ function parsePower(value: unknown, path: string, ctx: Context): Record<string, 
   return power;
 }
 
-function parseDrive(obj: Obj, path: string, ctx: Context, power: Record<string, number>): ElectricalDrive | undefined {
+/** The set point of an electrical segment without voutV: the divider of every fed device, all alike. */
+function dividerSetPoint(fed: Device[], path: string): number {
+  const p = fieldPath(path, 'voutV');
+  const without = fed.filter((d) => !d.electrical?.adjustable).map((d) => d.id);
+  if (without.length > 0) typeFail(p, `is required (${without.join(', ')} ${without.length === 1 ? 'has' : 'have'} no electrical.adjustable divider to set it)`);
+  const outputs = fed.map((d) => adjustableOutputV(d.electrical!.adjustable!));
+  if (outputs.some((v) => Math.abs(v - outputs[0]) > 1e-9 * outputs[0])) {
+    rangeFail(p, `is required: the fed devices' dividers set different outputs (${outputs.map((v) => `${v.toPrecision(4)} V`).join(', ')})`);
+  }
+  return outputs[0];
+}
+
+type Drives = Pick<ProfileSegment, 'electrical' | 'railDrive'>;
+
+function parseDrive(obj: Obj, path: string, ctx: Context, power: Record<string, number>): Drives | undefined {
   const given = ['vinV', 'voutV', 'iloadA'].filter((k) => obj[k] !== undefined);
   if (given.length === 0) {
-    if (obj.devices !== undefined) typeFail(fieldPath(path, 'devices'), 'only used with vinV, voutV and iloadA');
+    if (obj.devices !== undefined) typeFail(fieldPath(path, 'devices'), 'only used with iloadA (and voutV, vinV)');
     return undefined;
   }
-  const drive: ElectricalDrive = {
-    vinV: readNumber(obj, 'vinV', path, { min: 0, unit: 'V' }),
-    voutV: readNumber(obj, 'voutV', path, { min: 0, unit: 'V' }),
-    iloadA: readNumber(obj, 'iloadA', path, { min: 0, unit: 'A' }),
-  };
   let fed: string[];
+  let listed: string[] | undefined;
   if (obj.devices !== undefined) {
     const listPath = fieldPath(path, 'devices');
-    fed = asArray(obj.devices, listPath, 1).map((item, i) => asId(item, fieldPath(listPath, i)));
+    fed = listed = asArray(obj.devices, listPath, 1).map((item, i) => asId(item, fieldPath(listPath, i)));
     fed.forEach((id, i) => {
       const p = fieldPath(listPath, i);
       if (!ctx.devices.has(id)) rangeFail(p, `no device has the id ${JSON.stringify(id)}`);
       if (fed.indexOf(id) !== i) rangeFail(p, `lists ${JSON.stringify(id)} twice`);
     });
-    drive.devices = fed;
   } else {
     fed = [...ctx.devices.values()].filter((d) => (d.electrical?.role ?? 'pass') === 'pass').map((d) => d.id);
-    if (fed.length === 0) rangeFail(path, 'has vinV, voutV and iloadA but no device has the electrical role "pass"; add a devices list');
+    if (fed.length === 0) rangeFail(path, 'has an electrical operating point but no device has the electrical role "pass"; add a devices list');
   }
+  const iloadA = readNumber(obj, 'iloadA', path, { min: 0, unit: 'A' });
+  const voutV = obj.voutV !== undefined ? readNumber(obj, 'voutV', path, { min: 0, unit: 'V' }) : dividerSetPoint(fed.map((id) => ctx.devices.get(id)!), path);
   for (const id of fed) {
     if (power[id] !== undefined) {
-      rangeFail(fieldPath(fieldPath(path, 'powerW'), id), `device ${JSON.stringify(id)} is also fed by this segment's vinV/voutV/iloadA; give it one or the other (a devices list chooses which devices the drive feeds)`);
+      rangeFail(fieldPath(fieldPath(path, 'powerW'), id), `device ${JSON.stringify(id)} is also fed by this segment's electrical operating point; give it one or the other (a devices list chooses which devices the drive feeds)`);
     }
   }
-  return drive;
+  const devices = listed ? { devices: listed } : {};
+  if (ctx.railPlan) {
+    if (obj.vinV !== undefined) typeFail(fieldPath(path, 'vinV'), 'leave it out: the railPlan supplies the input from the tap it selects');
+    return { railDrive: { voutV, iloadA, ...devices } };
+  }
+  if (obj.vinV === undefined) typeFail(fieldPath(path, 'vinV'), 'is required (a study without a railPlan gives every electrical segment its input voltage)');
+  return { electrical: { vinV: readNumber(obj, 'vinV', path, { min: 0, unit: 'V' }), voutV, iloadA, ...devices } };
 }
 
 function parseItem(value: unknown, path: string, ctx: Context, depth: number): void {
@@ -86,18 +104,21 @@ function parseItem(value: unknown, path: string, ctx: Context, depth: number): v
   const powerW = obj.powerW === undefined ? {} : parsePower(obj.powerW, fieldPath(path, 'powerW'), ctx);
   const segment: ProfileSegment = { durationS, powerW };
   const drive = parseDrive(obj, path, ctx, powerW);
-  if (drive) segment.electrical = drive;
+  if (drive) Object.assign(segment, drive);
   const label = readOptionalString(obj, 'label', path);
   if (label !== undefined) segment.label = label;
   if (ctx.out.length >= MAX_EXPANDED_SEGMENTS) rangeFail(path, `the profile holds more than ${MAX_EXPANDED_SEGMENTS.toLocaleString('en')} segments`);
   ctx.out.push(segment);
 }
 
-/** Reads `profile`, expanding nested `{ repeat, segments }` groups into a flat list. */
-export function parseProfile(value: unknown, path: string, devices: Device[]): Profile {
+/**
+ * Reads `profile`, expanding nested `{ repeat, segments }` groups into a flat list. With a
+ * rail plan, electrical segments leave out vinV and become `railDrive` segments.
+ */
+export function parseProfile(value: unknown, path: string, devices: Device[], railPlan = false): Profile {
   const obj = asObject(value, path);
   onlyKeys(obj, ['segments', 'repeat', 'periodic'], path);
-  const ctx: Context = { devices: new Map(devices.map((d) => [d.id, d])), out: [] };
+  const ctx: Context = { devices: new Map(devices.map((d) => [d.id, d])), out: [], railPlan };
   const listPath = fieldPath(path, 'segments');
   asArray(obj.segments, listPath, 1).forEach((item, i) => parseItem(item, fieldPath(listPath, i), ctx, 0));
   let total = 0;

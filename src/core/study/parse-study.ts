@@ -15,9 +15,10 @@ import { parseAmbient, parseEnclosure } from './parse-ambient';
 import { parseSink } from './parse-sink';
 import { parseDevice } from './parse-device';
 import { parseProfile } from './parse-profile';
+import { parseRailPlan } from './parse-rail-plan';
 import { DEFAULT_MARGIN_K } from './constants';
 
-const TOP_KEYS = ['format', 'version', 'title', 'description', 'notes', 'marginK', 'ambient', 'enclosure', 'sinks', 'devices', 'profile'];
+const TOP_KEYS = ['format', 'version', 'title', 'description', 'notes', 'marginK', 'ambient', 'enclosure', 'sinks', 'devices', 'profile', 'railPlan'];
 const RESERVED_IDS = ['ambient', 'enclosure'];
 
 function checkUniqueIds(items: { id: string }[], listPath: string, taken: Map<string, string>): void {
@@ -99,8 +100,10 @@ export function parseStudy(json: unknown): StudyDocument {
   checkSinkPaths(sinks, enclosure !== undefined);
   checkDeviceSinks(devices, sinks);
 
-  const profile = parseProfile(root.profile, 'profile', devices);
+  const railPlan = root.railPlan === undefined ? undefined : parseRailPlan(root.railPlan, 'railPlan', devices);
+  const profile = parseProfile(root.profile, 'profile', devices, railPlan !== undefined);
   const doc: StudyDocument = { format: STUDY_FORMAT, version: STUDY_VERSION, title, description, marginK, ambient, sinks, devices, profile };
   if (enclosure) doc.enclosure = enclosure;
+  if (railPlan) doc.railPlan = railPlan;
   return doc;
 }

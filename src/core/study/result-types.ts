@@ -1,6 +1,10 @@
 import type { EventKind, StudyEvent } from './event-log';
 import type { Series } from './series-recorder';
 import type { BoundaryTable } from './boundary-table';
+import type { DeviceKind } from './types';
+import type { DeviceSoaResult } from './soa-result-types';
+import type { RailPlanResult } from './rail-result-types';
+import type { AdjustableResult } from './adjustable-result';
 
 /** Node temperatures (time, the table's columns) at the peak of `node`. */
 export type PeakRow = { node: string; row: Float64Array };
@@ -32,6 +36,9 @@ export type DeviceResult = {
   energyJ: number;
   /** Thermal-shutdown trips. */
   shutdowns: number;
+  kind?: DeviceKind;
+  /** With an adjustable divider: its set point and the top of the range the inputs allow. */
+  adjustable?: AdjustableResult;
 };
 
 export type SinkResult = {
@@ -58,6 +65,12 @@ export type StudyResult = {
   worst: { device: string; peakJunctionC: number; marginToTargetK: number; timeS: number };
   /** True when every junction stays below its target. */
   meetsTarget: boolean;
+  /** SOA check of each device with an SOA model, by device id (PHYSICS.md §4). */
+  soa: Record<string, DeviceSoaResult>;
+  /** True when every SOA check passes (also when no device has an SOA model). */
+  soaPasses: boolean;
+  /** With a rail plan: its map, worst cases, best thresholds, required Rθsa and the taps selected. */
+  railPlan?: RailPlanResult;
   /** Events in time order (at most MAX_LISTED_EVENTS), and how many of each kind happened. */
   events: StudyEvent[];
   eventCounts: Record<EventKind, number>;

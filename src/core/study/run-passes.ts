@@ -6,6 +6,7 @@ import type { AmbientIntervals } from './ambient-intervals';
 import { forEachPiece } from './timeline';
 import { createStepper } from './stepper';
 import { createBatchRunner } from './batch-runner';
+import type { SoaTracker } from './soa-tracker';
 
 /** Either solver path behind one face. */
 export type Runner = {
@@ -18,9 +19,9 @@ export type Runner = {
   rsaRange(): [number, number][] | undefined;
 };
 
-export function makeRunner(sm: StudyModel, batch: boolean, observer: Observer | null, events: EventLog | null): Runner {
+export function makeRunner(sm: StudyModel, batch: boolean, observer: Observer | null, events: EventLog | null, soa: SoaTracker | null = null): Runner {
   if (batch) {
-    const b = createBatchRunner(sm, observer, events);
+    const b = createBatchRunner(sm, observer, events, soa);
     const on = sm.doc.devices.map(() => true);
     return {
       T: b.T,
@@ -32,7 +33,7 @@ export function makeRunner(sm: StudyModel, batch: boolean, observer: Observer | 
       rsaRange: () => undefined,
     };
   }
-  const s = createStepper(sm, observer, events);
+  const s = createStepper(sm, observer, events, soa);
   return {
     T: s.T,
     on: s.on,
@@ -46,12 +47,24 @@ export function makeRunner(sm: StudyModel, batch: boolean, observer: Observer | 
 
 export type PassesRun = { endS: number; ambientMinC: number; ambientMaxC: number };
 
+/** Called before the first piece of each segment (tap changes are logged there). */
+export type SegmentStart = (timeS: number, segmentIndex: number, pass: number) => void;
+
 /** Runs `passes` passes of the profile through the runner from its current state. */
-export function runPasses(doc: StudyDocument, runner: Runner, ambient: AmbientIntervals, passes: number, bucketS: number, bucketCount: number): PassesRun {
+export function runPasses(
+  doc: StudyDocument,
+  runner: Runner,
+  ambient: AmbientIntervals,
+  passes: number,
+  bucketS: number,
+  bucketCount: number,
+  onSegmentStart?: SegmentStart,
+): PassesRun {
   let lastTa = ambient.valueC[0];
   let ambientMinC = Infinity;
   let ambientMaxC = -Infinity;
-  const endS = forEachPiece(doc, ambient, { passes, bucketS, bucketCount, wrapAmbient: doc.profile.periodic }, (t0, h, s, ta, bucket) => {
+  const endS = forEachPiece(doc, ambient, { passes, bucketS, bucketCount, wrapAmbient: doc.profile.periodic }, (t0, h, s, ta, bucket, pass, first) => {
+    if (first && onSegmentStart) onSegmentStart(t0, s, pass);
     lastTa = ta;
     if (ta < ambientMinC) ambientMinC = ta;
     if (ta > ambientMaxC) ambientMaxC = ta;

@@ -5,6 +5,7 @@ import type { EventLog } from './event-log';
 import { boundsFor, notePower, observeStretch, sampleState, type Observer } from './observer';
 import { fedDevices, segmentPower, type SegmentPower } from './segment-power';
 import { logDriveEvents } from './drive-events';
+import type { SoaTracker } from './soa-tracker';
 import { MAX_SOLVED_PIECES } from './constants';
 
 /** Round-off allowance of the stretch bounds, K. */
@@ -32,7 +33,7 @@ export type Stepper = {
   rsaRange(): [number, number][];
 };
 
-export function createStepper(sm: StudyModel, observer: Observer | null, events: EventLog | null): Stepper {
+export function createStepper(sm: StudyModel, observer: Observer | null, events: EventLog | null, soa: SoaTracker | null = null): Stepper {
   const { doc } = sm;
   const m = doc.devices.length;
   const N = sm.reference.nodeCount;
@@ -123,6 +124,7 @@ export function createStepper(sm: StudyModel, observer: Observer | null, events:
         observeStretch(observer, sm, model, T, u, t, step, ambientC, scratch);
         notePower(observer, p.partPowerW, step);
       }
+      soa?.stretch(model, T, u, t, step, segmentIndex, p, on);
       if (events) {
         const drive = doc.profile.segments[segmentIndex].electrical;
         if (drive) logDriveEvents(doc, events, p, drive.vinV, drive.voutV, drive.iloadA, t, step);

@@ -7,7 +7,16 @@ import type { AmbientIntervals } from './ambient-intervals';
  * segments are skipped. With `wrapAmbient` the ambient restarts with each pass (a periodic
  * study); otherwise its times run from the start of the first pass.
  */
-export type PieceVisitor = (startS: number, durationS: number, segmentIndex: number, ambientC: number, bucket: number) => void;
+export type PieceVisitor = (
+  startS: number,
+  durationS: number,
+  segmentIndex: number,
+  ambientC: number,
+  bucket: number,
+  /** The pass the piece belongs to, and whether it is the first piece of its segment. */
+  pass: number,
+  segmentStart: boolean,
+) => void;
 
 export type TimelineOptions = {
   passes: number;
@@ -49,7 +58,7 @@ export function forEachPiece(doc: StudyDocument, ambient: AmbientIntervals, opti
         }
         const nextAmb = amb + 1 < startS.length ? startS[amb + 1] + ambOffset : Infinity;
         const end = Math.min(segEnd, nextAmb, nextEdge);
-        visit(cur, end - cur, s, valueC[amb], bucket);
+        visit(cur, end - cur, s, valueC[amb], bucket, pass, cur === t);
         cur = end;
       }
       t = segEnd;

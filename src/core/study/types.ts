@@ -1,5 +1,7 @@
 import type { CauerStage, FosterTerm } from '../thermal';
 import type { CurvePoint } from '../electrical';
+import type { SoaModel } from '../soa';
+import type { OutputRange, RailPlan, Relay } from '../rails';
 
 /**
  * The study document, format "junctura-study" version 1, as returned by `parseStudy`:
@@ -10,7 +12,7 @@ import type { CurvePoint } from '../electrical';
 export const STUDY_FORMAT = 'junctura-study';
 export const STUDY_VERSION = 1;
 
-export type { CauerStage, FosterTerm, CurvePoint };
+export type { CauerStage, FosterTerm, CurvePoint, SoaModel };
 
 export type PackageModel =
   | { kind: 'foster'; terms: FosterTerm[] }
@@ -18,6 +20,9 @@ export type PackageModel =
   | { kind: 'lumped'; rthKPerW: number; capacityJPerK: number };
 
 export type ThermalShutdown = { tripC: number; hysteresisK: number };
+
+/** Divider of an adjustable regulator: Vout = Vref (1 + R2/R1) + Iadj·R2 (PHYSICS.md §1). */
+export type AdjustableDivider = { vrefV: number; r1Ohm: number; r2Ohm: number; iadjA: number };
 
 export type ElectricalModel = {
   role: 'pass' | 'other';
@@ -27,7 +32,13 @@ export type ElectricalModel = {
   /** Current limit of one part against its differential Vin − Vout: `x` V, `y` A. */
   currentLimit?: CurvePoint[];
   thermalShutdown?: ThermalShutdown;
+  /** Set point from a divider; segments feeding this device may then leave out voutV. */
+  adjustable?: AdjustableDivider;
 };
+
+/** What a device is; informational, except that an integrated regulator has no SOA model. */
+export type DeviceKind = 'regulator' | 'bipolar' | 'darlington' | 'mosfet';
+export const DEVICE_KINDS: readonly DeviceKind[] = ['regulator', 'bipolar', 'darlington', 'mosfet'];
 
 export type Device = {
   id: string;
@@ -39,6 +50,11 @@ export type Device = {
   package: PackageModel;
   interfaceRthKPerW: number;
   electrical?: ElectricalModel;
+  kind?: DeviceKind;
+  /** The team library part it was taken from (informational). */
+  partId?: number;
+  /** Safe operating area of one part, checked at every operating point of the solved profile. */
+  soa?: SoaModel;
 };
 
 export type NaturalConvection = { referenceRiseK: number; exponent: number };
@@ -65,12 +81,17 @@ export type Ambient =
 
 export type ElectricalDrive = { vinV: number; voutV: number; iloadA: number; devices?: string[] };
 
+/** An operating point whose input voltage comes from the tap the rail plan selects. */
+export type RailDrive = { voutV: number; iloadA: number; devices?: string[] };
+
 /** One constant-input stretch of the load profile after groups are expanded. */
 export type ProfileSegment = {
   durationS: number;
   /** Watts in each part of the named device entries. */
   powerW: Record<string, number>;
   electrical?: ElectricalDrive;
+  /** Only in a study with a rail plan (instead of `electrical`). */
+  railDrive?: RailDrive;
   label?: string;
 };
 
@@ -78,6 +99,17 @@ export type Profile = {
   segments: ProfileSegment[];
   repeat: number;
   periodic: boolean;
+};
+
+/**
+ * The rail plan of a study (src/core/rails types): sources, taps, thresholds with hysteresis
+ * on the sensed voltage; the device entry it feeds; the relay for the chatter check; the
+ * Vout × Iout range and grid of the dissipation map.
+ */
+export type StudyRailPlan = RailPlan & {
+  device: string;
+  relay?: Relay;
+  map: OutputRange & { voutSteps: number; ioutSteps: number };
 };
 
 export type StudyDocument = {
@@ -91,4 +123,5 @@ export type StudyDocument = {
   sinks: Sink[];
   devices: Device[];
   profile: Profile;
+  railPlan?: StudyRailPlan;
 };

@@ -6,6 +6,7 @@ export const EVENT_LABELS: Record<EventKind, { one: string; many: string }> = {
   resume: { one: 'resume after shutdown', many: 'resumes after shutdown' },
   dropout: { one: 'dropout', many: 'dropouts' },
   'current-limit': { one: 'current limit', many: 'current limits' },
+  'tap-change': { one: 'tap change', many: 'tap changes' },
 };
 
 export type EventText = { title: string; detail: string };
@@ -27,6 +28,8 @@ export function eventText(event: StudyEvent): EventText {
         title: `Current limit, ${event.devices.join(', ')}`,
         detail: `${formatQuantity(event.deliveredA, 'A')} delivered of ${formatQuantity(event.requestedA, 'A')} asked, ${formatQuantity(event.differentialV, 'V')} across, for ${formatDuration(event.endS - event.timeS)}`,
       };
+    case 'tap-change':
+      return { title: `Tap change to ${event.toName}`, detail: `from ${event.fromName}, sensed ${formatQuantity(event.sensedV, 'V')}` };
   }
 }
 

@@ -1,0 +1,75 @@
+import { checkOperatingPoints, SOA_CHART_DECADES, SOA_REFERENCE_CASE_C, soaBoundary, type SoaCheck, type SoaModel } from '../soa';
+import type { Device } from './types';
+import type { MergedPoint, SoaAccumulator } from './soa-accumulator';
+import type { DeviceSoaResult, SoaPointResult } from './soa-result-types';
+import { MAX_LISTED_SOA_POINTS } from './constants';
+
+/** The SOA core names its model `model`; the study names the device's field. */
+function withDevicePath<T>(index: number, run: () => T): T {
+  try {
+    return run();
+  } catch (e) {
+    if (!(e instanceof RangeError)) throw e;
+    throw new RangeError(e.message.replace(/^model\b/, `devices[${index}].soa`));
+  }
+}
+
+function pointResult(p: MergedPoint, check: SoaCheck, k: number): SoaPointResult {
+  return {
+    timeS: p.timeS,
+    durationS: p.durationS,
+    vceV: p.vceV,
+    icA: p.icA,
+    caseC: p.caseC,
+    pulseS: check.pulses[k],
+    allowedA: check.allowedA[k],
+    margin: check.margin[k],
+    limit: check.limits[k],
+    occurrences: p.occurrences,
+    firstTimeS: p.firstTimeS,
+  };
+}
+
+/** Boundaries at the worst point's condition and at 25 °C, reaching down to the lowest listed Vce. */
+function boundaries(model: SoaModel, worst: SoaPointResult, points: SoaPointResult[]): DeviceSoaResult['boundaries'] {
+  const lowest = points.reduce((v, p) => (p.vceV > 0 && p.vceV < v ? p.vceV : v), Infinity);
+  const curve = (caseC: number) => {
+    const cond = { caseC, pulseS: worst.pulseS };
+    const plain = soaBoundary(model, cond);
+    const bottom = plain.vceMaxV / 10 ** SOA_CHART_DECADES;
+    return lowest / 2 < bottom ? soaBoundary(model, cond, { vceMinV: lowest / 2 }) : plain;
+  };
+  return { atWorstCase: curve(worst.caseC), atReference: curve(SOA_REFERENCE_CASE_C) };
+}
+
+/** Checks a device's merged operating points (checkOperatingPoints) and lays out the result. */
+export function deviceSoaResult(device: Device, index: number, acc: SoaAccumulator): DeviceSoaResult {
+  const model = device.soa!;
+  const merged = acc.points();
+  const check = withDevicePath(index, () => checkOperatingPoints(model, merged));
+  const all = merged.map((p, k) => pointResult(p, check, k));
+  const worst = check.worst ? all[check.worst.index] : null;
+  const listed =
+    all.length <= MAX_LISTED_SOA_POINTS
+      ? all
+      : [...all].sort((a, b) => a.margin - b.margin || a.timeS - b.timeS).slice(0, MAX_LISTED_SOA_POINTS);
+  listed.sort((a, b) => a.timeS - b.timeS);
+  const failedPoints = check.failedCount + acc.droppedFailed;
+  const warnings: DeviceSoaResult['warnings'] = [];
+  if (acc.linearMode.stretches > 0) {
+    warnings.push({ code: 'mosfet-linear-mode', message: acc.linearMode.message, stretches: acc.linearMode.stretches, firstTimeS: acc.linearMode.firstTimeS });
+  }
+  return {
+    device: device.id,
+    transistor: model.transistor,
+    passed: failedPoints === 0,
+    stretches: acc.stretches,
+    distinctPoints: merged.length + acc.droppedPoints,
+    failedPoints,
+    points: listed,
+    pointsListedAll: listed.length === all.length && acc.droppedPoints === 0,
+    worst,
+    warnings,
+    boundaries: worst ? withDevicePath(index, () => boundaries(model, worst, listed)) : null,
+  };
+}

@@ -1,0 +1,90 @@
+import { peakInSegment, type ModalModel } from '../thermal';
+import type { StudyModel } from './study-model';
+import type { SegmentPower } from './segment-power';
+import { boundsFor } from './observer';
+import { createSoaAccumulator, type SoaAccumulator, type SoaStretch } from './soa-accumulator';
+import { STRETCH_JOIN_REL_TOL } from './constants';
+
+type Open = { timeS: number; endS: number; vceV: number; icA: number; caseC: number };
+
+/**
+ * Operating points of the devices with an SOA model, gathered while the final run is solved
+ * (PHYSICS.md §4): a stretch is a run of constant Vce = Vin − Vout and Ic = I/n of one part,
+ * however many pieces (chart buckets, ambient steps, events) it is solved in; its case
+ * temperature is the exact highest one during the stretch. Stretches without current, and
+ * devices driven by powerW, have nothing to check and are left out.
+ */
+export type SoaTracker = {
+  /** Devices tracked (indices into doc.devices) and their accumulators, in device order. */
+  devices: number[];
+  accumulators: SoaAccumulator[];
+  stretch(model: ModalModel, T: ArrayLike<number>, u: ArrayLike<number>, t: number, h: number, segmentIndex: number, power: SegmentPower, on: ArrayLike<boolean>): void;
+  /** Closes the open stretches; a periodic run joins its last stretch to its first when they continue each other. */
+  finish(endS: number): void;
+};
+
+export function createSoaTracker(sm: StudyModel): SoaTracker | null {
+  const { doc } = sm;
+  const devices = doc.devices.flatMap((d, i) => (d.soa ? [i] : []));
+  if (devices.length === 0) return null;
+  const accumulators = devices.map((d) => createSoaAccumulator(doc.devices[d].soa!));
+  const open: (Open | null)[] = devices.map(() => null);
+  const firstOfRun: (Open | null)[] = devices.map(() => null);
+  const periodic = doc.profile.periodic;
+
+  function close(k: number): void {
+    const o = open[k];
+    open[k] = null;
+    if (!o) return;
+    // Held back: in a periodic run it may continue the last stretch of the period.
+    if (periodic && o.timeS === 0 && !firstOfRun[k]) {
+      firstOfRun[k] = o;
+      return;
+    }
+    accumulators[k].add(toStretch(o));
+  }
+
+  function stretch(model: ModalModel, T: ArrayLike<number>, u: ArrayLike<number>, t: number, h: number, segmentIndex: number, power: SegmentPower, on: ArrayLike<boolean>): void {
+    if (h === 0) return;
+    const drive = doc.profile.segments[segmentIndex].electrical;
+    const op = power.operatingPoint;
+    let loaded = false;
+    devices.forEach((d, k) => {
+      const conducts = drive && op && !op.outputOff && on[d] && op.partCurrentA > 0 && power.fed.includes(d);
+      if (!conducts) return close(k);
+      const vceV = drive.vinV - op.voutV;
+      const icA = op.partCurrentA;
+      const o = open[k];
+      const node = sm.case[d];
+      if (o && o.vceV === vceV && o.icA === icA && Math.abs(o.endS - t) <= STRETCH_JOIN_REL_TOL * Math.max(1, t)) {
+        o.endS = t + h;
+        const bounds = boundsFor(model);
+        if (!loaded) bounds.load(T, u, h);
+        loaded = true;
+        // The exact search only where the case could get hotter than the stretch has been.
+        if (bounds.upper(node) > o.caseC) o.caseC = Math.max(o.caseC, peakInSegment(model, T, u, h, node).valueC);
+        return;
+      }
+      close(k);
+      open[k] = { timeS: t, endS: t + h, vceV, icA, caseC: peakInSegment(model, T, u, h, node).valueC };
+    });
+  }
+
+  function finish(endS: number): void {
+    devices.forEach((_, k) => {
+      const last = open[k];
+      const first = firstOfRun[k];
+      open[k] = null;
+      if (last && first && last !== first && last.vceV === first.vceV && last.icA === first.icA && Math.abs(last.endS - endS) <= STRETCH_JOIN_REL_TOL * Math.max(1, endS)) {
+        accumulators[k].add({ ...toStretch(last), durationS: last.endS - last.timeS + (first.endS - first.timeS), caseC: Math.max(last.caseC, first.caseC) });
+        return;
+      }
+      if (last) accumulators[k].add(toStretch(last));
+      if (first) accumulators[k].add(toStretch(first));
+    });
+  }
+
+  return { devices, accumulators, stretch, finish };
+}
+
+const toStretch = (o: Open): SoaStretch => ({ timeS: o.timeS, durationS: o.endS - o.timeS, vceV: o.vceV, icA: o.icA, caseC: o.caseC });
