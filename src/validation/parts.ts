@@ -1,7 +1,6 @@
 import * as yup from 'yup';
 import { checkSoaModel, type SoaModel } from '../core/soa';
-import { parseElectrical } from '../core/study/parse-electrical';
-import { parsePackage } from '../core/study/parse-package';
+import { parseElectrical, parsePackage } from '../core/study';
 
 export const PART_KINDS = ['regulator', 'bipolar', 'darlington', 'mosfet'] as const;
 
