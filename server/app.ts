@@ -16,7 +16,8 @@ import { apiRouter } from './routes';
 const SequelizeStore = connectSessionSequelize(session.Store);
 
 export const SESSION_COOKIE = 'junctura.sid';
-const SESSION_MAX_AGE_MS = 7 * 24 * 3600 * 1000;
+// Fixed lifetime: a rolling session would write the session row on every request.
+const SESSION_MAX_AGE_MS = 14 * 24 * 3600 * 1000;
 
 /** `stop` ends the app's timers (the session sweep); `close` also closes the database. */
 export type AppLocals = { db: Db; stop: () => void; close: () => Promise<void> };
@@ -56,7 +57,7 @@ export function createApp(config: Config, db: Db = createDb(config.databaseUrl))
       store,
       resave: false,
       saveUninitialized: false,
-      rolling: true,
+      rolling: false,
       proxy: config.trustProxy,
       cookie: { httpOnly: true, sameSite: 'lax', secure: 'auto', maxAge: SESSION_MAX_AGE_MS, path: '/' },
     }),

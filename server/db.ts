@@ -1,6 +1,6 @@
 import fs from 'node:fs';
 import path from 'node:path';
-import { Sequelize } from 'sequelize';
+import { Sequelize, Transaction } from 'sequelize';
 import { initModels, type Models } from './models';
 
 export type Db = { sequelize: Sequelize; models: Models };
@@ -39,6 +39,21 @@ function configureSqliteConnections(sequelize: Sequelize) {
   };
 }
 
+/**
+ * One write transaction at a time in this process. node-sqlite3 runs statements on libuv's
+ * small thread pool; transactions waiting on SQLite's write lock would otherwise occupy every
+ * thread while the one holding the lock waits for a thread to commit.
+ */
+function serialiseTransactions(sequelize: Sequelize) {
+  let tail: Promise<unknown> = Promise.resolve();
+  const begin = sequelize.transaction.bind(sequelize) as (...args: unknown[]) => Promise<unknown>;
+  (sequelize as unknown as { transaction: (...args: unknown[]) => Promise<unknown> }).transaction = (...args: unknown[]) => {
+    const run = tail.then(() => begin(...args));
+    tail = run.catch(() => undefined);
+    return run;
+  };
+}
+
 /** Creates the Sequelize instance and models. Opens no connection until first used. */
 export function createDb(databaseUrl: string): Db {
   const storage = sqliteStorage(databaseUrl);
@@ -49,7 +64,11 @@ export function createDb(databaseUrl: string): Db {
     logging: false,
     pool: { max: 1, min: 0, idle: 10_000 },
     retry: { max: 5, match: [/SQLITE_BUSY/] },
+    // Writers take the write lock at BEGIN, so concurrent transactions queue on the busy
+    // timeout instead of failing when a read lock cannot be upgraded.
+    transactionType: Transaction.TYPES.IMMEDIATE,
   });
   configureSqliteConnections(sequelize);
+  serialiseTransactions(sequelize);
   return { sequelize, models: initModels(sequelize) };
 }

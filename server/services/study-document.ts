@@ -1,3 +1,4 @@
+import crypto from 'node:crypto';
 import { evaluateStudy, parseStudy, type StudyDocument, type StudyResult } from '../../src/core/study';
 import { AppError } from '../errors';
 
@@ -20,13 +21,28 @@ export function checkDocument(document: unknown, prefix = 'document'): StudyDocu
   }
 }
 
+const CACHE_SIZE = 200;
+/** Results by document content: a result depends on nothing else, and solving can take a while. */
+const cache = new Map<string, StudyResult>();
+
 /** Parses and solves; solver refusals (too large, no path to ambient) are the client's 400 too. */
 export function solveDocument(document: unknown, options: { seriesPoints?: number } = {}): StudyResult {
+  const key = crypto.createHash('sha256').update(JSON.stringify(document)).update(`|${options.seriesPoints ?? ''}`).digest('hex');
+  const hit = cache.get(key);
+  if (hit) {
+    cache.delete(key);
+    cache.set(key, hit);
+    return hit;
+  }
   const doc = checkDocument(document);
+  let result: StudyResult;
   try {
-    return evaluateStudy(doc, { seriesPoints: options.seriesPoints });
+    result = evaluateStudy(doc, { seriesPoints: options.seriesPoints });
   } catch (err) {
     if (err instanceof RangeError || err instanceof TypeError) throw toBadRequest(err, 'document');
     throw err;
   }
+  cache.set(key, result);
+  if (cache.size > CACHE_SIZE) cache.delete(cache.keys().next().value!);
+  return result;
 }
