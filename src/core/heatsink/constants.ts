@@ -41,6 +41,12 @@ export const PEAK_TOLERANCE_K = 1e-4;
  */
 export const MODE_GROUP_REL_GAP = 0.05;
 
+/**
+ * Modes with λh above this have decayed within the segment: e^(−40) ≈ 4e-18, below the
+ * rounding of any temperature, so e^(−λh) is taken as 0 without computing it.
+ */
+export const DECAYED_EXPONENT = 40;
+
 /** The interior peak time is refined until its bracket is this fraction of the segment. */
 export const PEAK_TIME_REL_TOL = 1e-12;
 

@@ -41,3 +41,5 @@ export type { PlateFinCandidateOptions } from './plate-fin-candidate';
 export { flatPlateAtRise, flatPlateAtPower } from './flat-plate';
 export type { FlatPlateGeometry, FlatPlateEstimate } from './flat-plate';
 export { riseAtPower } from './solve-rise';
+export { rankingSetupFromStudy, MAX_RANKING_SEGMENTS } from './ranking-from-study';
+export type { StudyRanking } from './ranking-from-study';

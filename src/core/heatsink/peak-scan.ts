@@ -1,5 +1,5 @@
 import { temperaturesFromModal, type ModalModel } from '../thermal';
-import { MODE_GROUP_REL_GAP, PEAK_TOLERANCE_K } from './constants';
+import { DECAYED_EXPONENT, MODE_GROUP_REL_GAP, PEAK_TOLERANCE_K } from './constants';
 import { coldModes, periodicModes } from './modal-start';
 import { refinePeaks } from './refine-peaks';
 import type { ScanProfile } from './scan-profile';
@@ -8,6 +8,7 @@ import { createScanWorkspace, reserveScanWorkspace, type ScanWorkspace } from '.
 // Module constants read once: imported bindings can cost a property access in hot loops.
 const TOL = PEAK_TOLERANCE_K;
 const GROUP_GAP = MODE_GROUP_REL_GAP;
+const DECAYED = DECAYED_EXPONENT;
 
 export type ScanResult = {
   /** Maximum of each watched node, °C, at most PEAK_TOLERANCE_K below the exact one. */
@@ -58,7 +59,10 @@ export function scanPeaks(
 
   for (let i = 0; i < D; i++) {
     const h = distinctDurations[i];
-    for (let k = 0; k < n; k++) decay[i * n + k] = Math.exp(-rates[k] * h);
+    for (let k = 0; k < n; k++) {
+      const z = rates[k] * h;
+      decay[i * n + k] = z > DECAYED ? 0 : Math.exp(-z);
+    }
   }
   // Cheap bound first: a_0 + Σ max(a_k, a_k e^(−λ_k h)). Where it is too weak, the grouped one.
   // Group leaders; for the others the slack of bounding them with their leader's rate λ_g:
