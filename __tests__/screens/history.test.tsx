@@ -47,6 +47,9 @@ const REVISIONS = [
   },
 ];
 
+const OLD_TEXT = 'Demo data, invented for this example. A linear supply fed from two 24 V adapters in series.';
+const NEW_TEXT = 'Demo data, invented for this example. A linear supply fed from two equal 24 V adapters in series.';
+
 /** `GET /api/studies/21/revisions/1`: revision 1 compared with the current version 3. */
 const REVISION_ONE = {
   revision: {
@@ -58,8 +61,15 @@ const REVISION_ONE = {
     createdAt: '2025-05-01T10:00:00.000Z',
   },
   current: 3,
-  changesToCurrent: [{ kind: 'changed', path: 'title', before: 'Post-regulator', after: 'Linear post-regulator after a buck stage' }],
-  summaryToCurrent: ['title: "Post-regulator" → "Linear post-regulator after a buck stage"'],
+  changesToCurrent: [
+    { kind: 'changed', path: 'title', before: 'Post-regulator', after: 'Linear post-regulator after a buck stage' },
+    { kind: 'changed', path: 'description', before: OLD_TEXT, after: NEW_TEXT },
+  ],
+  // The server's lines keep about 40 characters of each side (src/core/diff).
+  summaryToCurrent: [
+    'title: "Post-regulator" → "Linear post-regulator after a buck stage"',
+    'description: "Demo data, invented for this example… → "Demo data, invented for this example…',
+  ],
 };
 
 function routes(extra: Record<string, (body?: unknown) => Promise<unknown>> = {}) {
@@ -99,6 +109,11 @@ describe('study history', () => {
     expect(await screen.findByText(/^Read-only: revision 1/)).toBeVisible();
     expect(app.getPathname()).toBe('/studies/21/revisions/1');
     expect(screen.getByText(REVISION_ONE.summaryToCurrent[0])).toBeVisible();
+    // A long text shows the stretch the edit touched, not two identical openings.
+    const now = screen.getByText(/^now: /);
+    expect(now).toHaveTextContent(/equal 24 V adapters/);
+    expect(now).toHaveTextContent(/^now: …/);
+    expect(screen.getByText(/^was: /)).not.toHaveTextContent(/equal/);
 
     fireEvent.press(screen.getByRole('button', { name: 'Restore this revision' }));
     expect(screen.getByText(/Its content becomes revision 4/)).toBeVisible();

@@ -56,7 +56,12 @@ export function RevisionScreen({ studyId, number }: RevisionScreenProps) {
           </Text>
           <Text variant={wide ? 'display' : 'title'}>{revision.title}</Text>
         </View>
-        <ChangesToCurrent number={revision.number} current={view.data.current} lines={view.data.summaryToCurrent} />
+        <ChangesToCurrent
+          number={revision.number}
+          current={view.data.current}
+          changes={view.data.changesToCurrent}
+          lines={view.data.summaryToCurrent}
+        />
         {!isCurrent && canEditStudy(session, study.data) ? (
           <RestoreRevision
             studyId={study.data.id}

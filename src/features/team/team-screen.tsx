@@ -1,3 +1,4 @@
+import { Link } from 'expo-router';
 import { StyleSheet, View } from 'react-native';
 
 import { EmptyState, Page, Text } from '@/components/ui';
@@ -33,6 +34,20 @@ export function TeamScreen() {
           Your role here: {ROLE_LABELS[team.role]}.
           {isOwner ? '' : ' Only owners change roles and invite members.'}
         </Text>
+        {isOwner ? (
+          <View style={styles.links}>
+            <Link href="/activity" style={styles.link}>
+              <Text variant="label" tone="accent">
+                Activity log
+              </Text>
+            </Link>
+            <Link href="/outbox" style={styles.link}>
+              <Text variant="label" tone="accent">
+                Outbox (development mail)
+              </Text>
+            </Link>
+          </View>
+        ) : null}
       </View>
       <MemberList key={team.teamId} teamId={team.teamId} teamName={team.teamName} userId={user.id} canManage={isOwner} />
       {isOwner ? (
@@ -47,4 +62,6 @@ export function TeamScreen() {
 
 const styles = StyleSheet.create({
   heading: { gap: spacing.xxs },
+  links: { flexDirection: 'row', flexWrap: 'wrap', gap: spacing.lg },
+  link: { paddingVertical: spacing.xs },
 });

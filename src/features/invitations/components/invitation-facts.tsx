@@ -9,13 +9,12 @@ import type { InvitationDetails } from '../types';
 
 export type InvitationFactsProps = { invitation: InvitationDetails };
 
-/** Who invites whom, to which team, in which role, and until when the link works. */
+/** Who invites, to which team, in which role, and until when the link works (the address is in the form). */
 export function InvitationFacts({ invitation }: InvitationFactsProps) {
   const facts = [
     { label: 'Team', value: invitation.teamName },
     { label: 'Role', value: ROLE_LABELS[invitation.role] },
     { label: 'Invited by', value: invitation.invitedBy ?? 'a team owner' },
-    { label: 'For', value: invitation.email },
     { label: 'Link works until', value: formatDateTime(invitation.expiresAt) },
   ];
   return (
@@ -25,7 +24,7 @@ export function InvitationFacts({ invitation }: InvitationFactsProps) {
           <Text variant="caption" tone="faint" style={styles.label}>
             {fact.label}
           </Text>
-          <Text variant={fact.label === 'For' ? 'mono' : 'body'} style={styles.value}>
+          <Text style={styles.value}>
             {fact.value}
           </Text>
         </View>

@@ -12,7 +12,8 @@ export type MessageTextProps = { text: string };
 export function MessageText({ text }: MessageTextProps) {
   return (
     <Text style={styles.body}>
-      {splitLinks(text).map((part, index) =>
+      {/* Mail text pads its sign-off with blank lines; one is enough on screen. */}
+      {splitLinks(text.replace(/\n{3,}/g, '\n\n')).map((part, index) =>
         part.kind === 'text' ? (
           part.text
         ) : part.path ? (

@@ -1,12 +1,37 @@
 import { StyleSheet, View } from 'react-native';
 
 import { Card, Text } from '@/components/ui';
-import { spacing } from '@/constants/theme';
+import { color, spacing } from '@/constants/theme';
 
-export type ChangesToCurrentProps = { number: number; current: number; lines: readonly string[] };
+import { longTextChange } from '../text-change';
+import type { FieldChange } from '../types';
+
+export type ChangesToCurrentProps = {
+  number: number;
+  current: number;
+  changes: readonly FieldChange[];
+  /** The server's readable line for each change, in the same order. */
+  lines: readonly string[];
+};
+
+function ChangeLine({ change, line }: { change: FieldChange | undefined; line: string }) {
+  const text = change?.kind === 'changed' ? longTextChange(change.before, change.after) : null;
+  if (change && text) {
+    return (
+      <View style={styles.text}>
+        <Text variant="mono">{change.path}</Text>
+        <Text variant="caption" tone="muted">
+          was: {text.before}
+        </Text>
+        <Text variant="caption">now: {text.after}</Text>
+      </View>
+    );
+  }
+  return <Text variant="mono">{line}</Text>;
+}
 
 /** What differs between this revision and the current version, one readable line per field. */
-export function ChangesToCurrent({ number, current, lines }: ChangesToCurrentProps) {
+export function ChangesToCurrent({ number, current, changes, lines }: ChangesToCurrentProps) {
   return (
     <Card role="region" aria-label="Compared with the current version">
       <Text variant="heading">Compared with the current version (v{current})</Text>
@@ -19,10 +44,8 @@ export function ChangesToCurrent({ number, current, lines }: ChangesToCurrentPro
           <Text variant="caption" tone="muted">
             From revision {number} to the current version:
           </Text>
-          {lines.map((line) => (
-            <Text key={line} variant="mono">
-              {line}
-            </Text>
+          {lines.map((line, index) => (
+            <ChangeLine key={`${index}-${line}`} change={changes[index]} line={line} />
           ))}
         </View>
       )}
@@ -31,5 +54,6 @@ export function ChangesToCurrent({ number, current, lines }: ChangesToCurrentPro
 }
 
 const styles = StyleSheet.create({
-  lines: { gap: spacing.xxs },
+  lines: { gap: spacing.xs },
+  text: { gap: spacing.xxs, paddingLeft: spacing.sm, borderLeftWidth: 2, borderLeftColor: color.border },
 });

@@ -60,7 +60,7 @@ export function MemberRow({ teamId, teamName, member, isYou, canManage }: Member
           />
           {confirming ? null : (
             <Button
-              label={isYou ? 'Leave team' : 'Remove'}
+              label={isYou ? 'Leave' : 'Remove'}
               variant="ghost"
               onPress={() => {
                 changeRole.reset();

@@ -36,12 +36,12 @@ export function TeamSwitcher({ tone }: TeamSwitcherProps) {
         onPress={() => setOpen(true)}
         style={({ pressed }) => [styles.trigger, pressed && (tone === 'dark' ? styles.pressedDark : styles.pressedLight)]}
       >
-        <NativeText style={[textStyle, styles.triggerText]} numberOfLines={1}>
+        <NativeText style={[textStyle, styles.triggerText]} numberOfLines={2}>
           {label}
         </NativeText>
         <Icon name="chevronDown" size={16} color={tone === 'dark' ? color.sidebarText : color.inkMuted} />
       </Pressable>
-      <Modal visible={open} transparent animationType="fade" onRequestClose={() => setOpen(false)}>
+      <Modal visible={open} transparent animationType="none" onRequestClose={() => setOpen(false)}>
         <Pressable accessibilityLabel="Close the team list" style={styles.backdrop} onPress={() => setOpen(false)}>
           <Pressable style={styles.sheet} onPress={() => undefined}>
             <Text variant="heading">Work in team</Text>
