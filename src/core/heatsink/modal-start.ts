@@ -12,20 +12,41 @@ export function coldModes(model: ModalModel, ta: number, x: Float64Array): void 
 }
 
 /**
- * Modal start of the periodic steady state: over one period x(Tp) = e^(−λTp) x(0) + r, r being
- * the period's response from x = 0, so x(0) = r / (1 − e^(−λTp)) (PHYSICS.md §3).
+ * Modal start of the periodic steady state: the state at the end of a period equals the one at
+ * its start, x(0) = x(Tp) = Σ_s (1 − e_s) x∞_s Π_(s' > s) e_s' / (1 − e^(−λTp)) per mode, with
+ * e_s = e^(−λ h_s) (PHYSICS.md §3). Summed backwards from the end, a mode stops as soon as the
+ * product of decays falls below e^(−decayedExponent): earlier segments no longer reach the end.
+ * Fast modes so take one segment and only the slow ones run far back.
  * decay holds e^(−λh) per distinct duration, equilibrium x∞ per distinct input row (see ScanProfile).
  */
-export function periodicModes(model: ModalModel, profile: ScanProfile, decay: Float64Array, equilibrium: Float64Array, x: Float64Array): void {
+export function periodicModes(
+  model: ModalModel,
+  profile: ScanProfile,
+  decay: Float64Array,
+  equilibrium: Float64Array,
+  x: Float64Array,
+  decayedExponent: number,
+): void {
   const { modeCount: n, rates } = model;
   const { durations, durationIndex, rowIndex } = profile;
-  if (!(profile.totalTimeS > 0)) throw new RangeError('profile: a periodic profile needs a period longer than 0 s');
-  x.fill(0);
-  for (let s = 0; s < durations.length; s++) {
-    if (durations[s] === 0) continue;
-    const base = durationIndex[s] * n;
-    const rn = rowIndex[s] * n;
-    for (let k = 0; k < n; k++) x[k] = equilibrium[rn + k] + decay[base + k] * (x[k] - equilibrium[rn + k]);
+  const T = profile.totalTimeS;
+  if (!(T > 0)) throw new RangeError('profile: a periodic profile needs a period longer than 0 s');
+  const floor = Math.exp(-decayedExponent);
+  for (let k = 0; k < n; k++) {
+    const lambda = rates[k];
+    let product = 1;
+    let sum = 0;
+    let s = durations.length - 1;
+    for (; s >= 0 && product > floor; s--) {
+      const h = durations[s];
+      if (h === 0) continue;
+      const z = lambda * h;
+      const e = decay[durationIndex[s] * n + k];
+      // 1 − e loses digits for small λh; expm1 keeps them.
+      const g = z < 0.1 ? -Math.expm1(-z) : 1 - e;
+      sum += product * g * equilibrium[rowIndex[s] * n + k];
+      product *= e;
+    }
+    x[k] = s < 0 ? sum / -Math.expm1(-lambda * T) : sum;
   }
-  for (let k = 0; k < n; k++) x[k] /= -Math.expm1(-rates[k] * profile.totalTimeS);
 }

@@ -53,7 +53,7 @@ export function scanPeaks(
   const nw = watch.length;
   const R = profile.distinctRows.length / q;
   reserveScanWorkspace(ws, D, R, S, n, nw);
-  const { decay, equilibrium, steady, snapshots, candidateSegment, candidateBound, candidateTime } = ws;
+  const { decay, equilibrium, steady } = ws;
   const rows = profile.distinctRows;
   const rowIndex = profile.rowIndex;
 
@@ -88,11 +88,18 @@ export function scanPeaks(
     for (let j = 0; j < q; j++) K0[w * q + j] = K[watch[w] * q + j];
   }
 
+  // x∞ = F u and the watched steady values K u per distinct row, column by column (long inner loops).
+  const Fcol = new Float64Array(q * n);
+  for (let k = 0; k < n; k++) for (let j = 0; j < q; j++) Fcol[j * n + k] = F[k * q + j];
   for (let r = 0; r < R; r++) {
-    for (let k = 0; k < n; k++) {
-      let v = 0;
-      for (let j = 0; j < q; j++) v += F[k * q + j] * rows[r * q + j];
-      equilibrium[r * n + k] = v;
+    const rn = r * n;
+    const u0 = rows[r * q];
+    for (let k = 0; k < n; k++) equilibrium[rn + k] = Fcol[k] * u0;
+    for (let j = 1; j < q; j++) {
+      const uj = rows[r * q + j];
+      if (uj === 0) continue;
+      const col = j * n;
+      for (let k = 0; k < n; k++) equilibrium[rn + k] += Fcol[col + k] * uj;
     }
     for (let w = 0; w < nw; w++) {
       let v = 0;
@@ -101,18 +108,26 @@ export function scanPeaks(
     }
   }
 
-  const x = new Float64Array(n);
+  let x = new Float64Array(n);
+  let next = new Float64Array(n);
   const d = new Float64Array(n);
   const u = new Float64Array(q);
   const peakC = new Float64Array(nw).fill(-Infinity);
   const peakTimeS = new Float64Array(nw);
   const counts = new Int32Array(nw);
+  const tr: Tracker = { peakC, peakTimeS, counts, S, n, ws, W0, leader, gap, cap, hasGroups, d };
 
   for (let j = 0; j < q; j++) u[j] = inputs[j];
-  if (periodic) periodicModes(model, profile, decay, equilibrium, x);
+  if (periodic) periodicModes(model, profile, decay, equilibrium, x, DECAYED);
   else coldModes(model, u[q - 1], x);
   const initialC = temperaturesFromModal(model, x, u);
 
+  // One pass over the modes per segment: new state and every watched node's start, end and
+  // bound. One and two watched nodes (one or two devices on the sink) get loops of their own
+  // with the sums in locals, which runs markedly faster than arrays of sums.
+  const start = new Float64Array(nw);
+  const end = new Float64Array(nw);
+  const bound = new Float64Array(nw);
   let t = 0;
   for (let s = 0; s < S; s++) {
     const h = durations[s];
@@ -120,48 +135,71 @@ export function scanPeaks(
     const base = durationIndex[s] * n;
     const rn = rowIndex[s] * n;
     const rw = rowIndex[s] * nw;
-    for (let k = 0; k < n; k++) d[k] = x[k] - equilibrium[rn + k];
-
-    let saved = false;
-    for (let w = 0; w < nw; w++) {
-      const wb = w * n;
-      const a0 = steady[rw + w];
-      let start = a0;
-      let end = start;
-      let bound = start;
+    if (nw === 2) {
+      let s0 = steady[rw];
+      let s1 = steady[rw + 1];
+      let e0 = s0;
+      let b0 = s0;
+      let e1 = s1;
+      let b1 = s1;
       for (let k = 0; k < n; k++) {
-        const a = W0[wb + k] * d[k];
-        const ae = a * decay[base + k];
-        start += a;
-        end += ae;
-        bound += a > ae ? a : ae;
+        const xi = equilibrium[rn + k];
+        const dk = x[k] - xi;
+        const de = dk * decay[base + k];
+        next[k] = xi + de;
+        const w0 = W0[k];
+        const w1 = W0[n + k];
+        const a0 = w0 * dk;
+        const ae0 = w0 * de;
+        const a1 = w1 * dk;
+        const ae1 = w1 * de;
+        s0 += a0;
+        e0 += ae0;
+        b0 += a0 > ae0 ? a0 : ae0;
+        s1 += a1;
+        e1 += ae1;
+        b1 += a1 > ae1 ? a1 : ae1;
       }
-      if (bound > peakC[w] + TOL && hasGroups) bound = Math.min(bound, groupedBound(W0, wb, d, decay, base, leader, gap, cap, a0, h, n));
-
-      let best = peakC[w];
-      if (bound <= best + TOL) continue;
-      if (start > best) {
-        best = start;
-        peakTimeS[w] = t;
+      if (b0 > peakC[0] + TOL) consider(tr, 0, s0, e0, b0, s, t, h, base, rn, x, equilibrium, decay, steady[rw]);
+      if (b1 > peakC[1] + TOL) consider(tr, 1, s1, e1, b1, s, t, h, base, rn, x, equilibrium, decay, steady[rw + 1]);
+    } else if (nw === 1) {
+      let s0 = steady[rw];
+      let e0 = s0;
+      let b0 = s0;
+      for (let k = 0; k < n; k++) {
+        const xi = equilibrium[rn + k];
+        const dk = x[k] - xi;
+        const de = dk * decay[base + k];
+        next[k] = xi + de;
+        const a0 = W0[k] * dk;
+        const ae0 = W0[k] * de;
+        s0 += a0;
+        e0 += ae0;
+        b0 += a0 > ae0 ? a0 : ae0;
       }
-      if (end > best) {
-        best = end;
-        peakTimeS[w] = t + h;
-      }
-      peakC[w] = best;
-      if (bound > best + TOL) {
-        const c = w * S + counts[w]++;
-        candidateSegment[c] = s;
-        candidateBound[c] = bound;
-        candidateTime[c] = t;
-        if (!saved) {
-          saved = true;
-          for (let k = 0; k < n; k++) snapshots[s * n + k] = x[k];
+      if (b0 > peakC[0] + TOL) consider(tr, 0, s0, e0, b0, s, t, h, base, rn, x, equilibrium, decay, steady[rw]);
+    } else {
+      for (let w = 0; w < nw; w++) start[w] = end[w] = bound[w] = steady[rw + w];
+      for (let k = 0; k < n; k++) {
+        const xi = equilibrium[rn + k];
+        const dk = x[k] - xi;
+        const de = dk * decay[base + k];
+        next[k] = xi + de;
+        for (let w = 0; w < nw; w++) {
+          const a = W0[w * n + k] * dk;
+          const ae = W0[w * n + k] * de;
+          start[w] += a;
+          end[w] += ae;
+          bound[w] += a > ae ? a : ae;
         }
       }
+      for (let w = 0; w < nw; w++) {
+        if (bound[w] > peakC[w] + TOL) consider(tr, w, start[w], end[w], bound[w], s, t, h, base, rn, x, equilibrium, decay, steady[rw + w]);
+      }
     }
-
-    for (let k = 0; k < n; k++) x[k] = equilibrium[rn + k] + decay[base + k] * d[k];
+    const old = x;
+    x = next;
+    next = old;
     t += h;
   }
 
@@ -177,6 +215,68 @@ export function scanPeaks(
     }
   }
   return { peakC, peakTimeS, finalC, initialC, interiorSearches };
+}
+
+type Tracker = {
+  peakC: Float64Array;
+  peakTimeS: Float64Array;
+  counts: Int32Array;
+  S: number;
+  n: number;
+  ws: ScanWorkspace;
+  W0: Float64Array;
+  leader: Uint8Array;
+  gap: Float64Array;
+  cap: Float64Array;
+  hasGroups: boolean;
+  d: Float64Array;
+};
+
+/**
+ * A segment whose termwise bound could raise node w's peak: tighten the bound by groups,
+ * take the end values, and set the segment aside (with its start state x) when its interior
+ * could still hold a higher peak.
+ */
+function consider(
+  tr: Tracker,
+  w: number,
+  start: number,
+  end: number,
+  bound: number,
+  s: number,
+  t: number,
+  h: number,
+  base: number,
+  rn: number,
+  x: Float64Array,
+  equilibrium: Float64Array,
+  decay: Float64Array,
+  a0: number,
+): void {
+  const { n, d, peakC, peakTimeS } = tr;
+  if (tr.hasGroups) {
+    for (let k = 0; k < n; k++) d[k] = x[k] - equilibrium[rn + k];
+    bound = Math.min(bound, groupedBound(tr.W0, w * n, d, decay, base, tr.leader, tr.gap, tr.cap, a0, h, n));
+  }
+  let best = peakC[w];
+  if (bound <= best + TOL) return;
+  if (start > best) {
+    best = start;
+    peakTimeS[w] = t;
+  }
+  if (end > best) {
+    best = end;
+    peakTimeS[w] = t + h;
+  }
+  peakC[w] = best;
+  if (bound > best + TOL) {
+    const ws = tr.ws;
+    const c = w * tr.S + tr.counts[w]++;
+    ws.candidateSegment[c] = s;
+    ws.candidateBound[c] = bound;
+    ws.candidateTime[c] = t;
+    for (let k = 0; k < n; k++) ws.snapshots[s * n + k] = x[k];
+  }
 }
 
 /** a_0 + Σ_groups max(A_g, A_g e^(−λ_g h)) + Σ |a_k| (λ_k − λ_g) min(h, 1/(e λ_g)) ≥ max f on [0, h]. */

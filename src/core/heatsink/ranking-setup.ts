@@ -1,4 +1,4 @@
-import { AMBIENT, fosterToCauer, type CauerStage, type LinkSpec, type NodeSpec } from '../thermal';
+import { fosterToCauer, type CauerStage, type LinkSpec, type NodeSpec } from '../thermal';
 import type { PackageModel } from '../study/types';
 import { checkArray, checkFinite, checkInteger, checkNonNegative, checkObject, checkPositive, checkString } from './check';
 
