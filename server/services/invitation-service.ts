@@ -58,7 +58,7 @@ export async function revokeInvitation(deps: Deps, auth: SessionView, teamId: nu
   if (!i) throw AppError.notFound('Invitation');
   await deps.db.sequelize.transaction(async (transaction) => {
     await i.update({ revokedAt: new Date() }, { transaction });
-    await recordEvent(deps.db, { teamId, actorId: auth.user.id, action: 'invitation.revoked', subjectType: 'invitation', subjectId: i.id }, transaction);
+    await recordEvent(deps.db, { teamId, actorId: auth.user.id, action: 'invitation.revoked', subjectType: 'invitation', subjectId: i.id, details: { email: i.email, role: i.role } }, transaction);
   });
 }
 
@@ -81,7 +81,7 @@ async function usableInvitation(deps: Deps, token: string, now = new Date()) {
 export async function describeInvitation(deps: Deps, token: string) {
   const i = await usableInvitation(deps, token);
   const accountExists = (await deps.db.models.User.count({ where: { email: i.email } })) > 0;
-  return { teamName: i.team!.name, role: i.role, email: i.email, invitedBy: i.invitedBy?.name ?? null, expiresAt: i.expiresAt.toISOString(), accountExists };
+  return { teamId: i.teamId, teamName: i.team!.name, role: i.role, email: i.email, invitedBy: i.invitedBy?.name ?? null, expiresAt: i.expiresAt.toISOString(), accountExists };
 }
 
 /**

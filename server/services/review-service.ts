@@ -20,7 +20,7 @@ export async function submitForReview(deps: Deps, auth: SessionView, study: Stud
   }
   await db.sequelize.transaction(async (transaction) => {
     await study.update({ status: 'in_review' }, { transaction });
-    await recordEvent(db, { teamId: study.teamId, actorId: auth.user.id, action: 'study.submitted', subjectType: 'study', subjectId: study.id, details: { revision: study.version } }, transaction);
+    await recordEvent(db, { teamId: study.teamId, actorId: auth.user.id, action: 'study.submitted', subjectType: 'study', subjectId: study.id, details: { title: study.title, revision: study.version } }, transaction);
   });
   const reviewers = await db.models.Membership.findAll({
     where: { teamId: study.teamId, role: { [Op.in]: ['reviewer', 'owner'] }, userId: { [Op.ne]: auth.user.id } },
@@ -55,7 +55,7 @@ export async function reviewStudy(deps: Deps, auth: SessionView, study: Study, i
     await study.update({ status: input.decision }, { transaction });
     await recordEvent(
       db,
-      { teamId: study.teamId, actorId: auth.user.id, action: 'study.reviewed', subjectType: 'study', subjectId: study.id, details: { revision: study.version, decision: input.decision } },
+      { teamId: study.teamId, actorId: auth.user.id, action: 'study.reviewed', subjectType: 'study', subjectId: study.id, details: { title: study.title, revision: study.version, decision: input.decision } },
       transaction,
     );
   });

@@ -162,7 +162,7 @@ export async function saveStudy(db: Db, auth: SessionView, study: Study, input: 
     await db.models.Revision.create({ studyId: study.id, number: input.baseVersion + 1, authorId: auth.user.id, ...next }, { transaction });
     await recordEvent(
       db,
-      { teamId: study.teamId, actorId: auth.user.id, action, subjectType: 'study', subjectId: study.id, details: { revision: input.baseVersion + 1, previousStatus: study.status } },
+      { teamId: study.teamId, actorId: auth.user.id, action, subjectType: 'study', subjectId: study.id, details: { title: next.title, revision: input.baseVersion + 1, previousStatus: study.status } },
       transaction,
     );
     return true;

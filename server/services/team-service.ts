@@ -32,9 +32,10 @@ export async function changeRole(db: Db, auth: SessionView, teamId: number, user
   const m = await findMembership(db, teamId, userId);
   if (m.role === 'owner' && role !== 'owner' && (await otherOwners(db, teamId, userId)) === 0) throw lastOwner();
   const from = m.role;
+  const user = await db.models.User.findByPk(userId);
   await db.sequelize.transaction(async (transaction) => {
     await m.update({ role }, { transaction });
-    await recordEvent(db, { teamId, actorId: auth.user.id, action: 'member.role_changed', subjectType: 'user', subjectId: userId, details: { from, to: role } }, transaction);
+    await recordEvent(db, { teamId, actorId: auth.user.id, action: 'member.role_changed', subjectType: 'user', subjectId: userId, details: { name: user?.name, from, to: role } }, transaction);
   });
 }
 
@@ -44,8 +45,13 @@ export async function removeMember(db: Db, auth: SessionView, teamId: number, us
   if (userId !== auth.user.id) requireRole(mine, ['owner'], 'Only owners remove members');
   const m = await findMembership(db, teamId, userId);
   if (m.role === 'owner' && (await otherOwners(db, teamId, userId)) === 0) throw lastOwner();
+  const user = await db.models.User.findByPk(userId);
   await db.sequelize.transaction(async (transaction) => {
     await m.destroy({ transaction });
-    await recordEvent(db, { teamId, actorId: auth.user.id, action: 'member.removed', subjectType: 'user', subjectId: userId }, transaction);
+    await recordEvent(
+      db,
+      { teamId, actorId: auth.user.id, action: 'member.removed', subjectType: 'user', subjectId: userId, details: { name: user?.name, email: user?.email, role: m.role } },
+      transaction,
+    );
   });
 }

@@ -23,6 +23,15 @@ describe('diffDocuments', () => {
     expect(diffDocuments({}, many, 10)).toHaveLength(10);
   });
 
+  it('shows long texts around where they differ', () => {
+    const a = 'A linear stage that runs from a 24 V rail with a pulsed load of 0.5 A.';
+    const b = 'A linear stage that runs from a 24 V rail with a pulsed load of 0.8 A.';
+    const [line] = describeChanges(diffDocuments({ description: a }, { description: b }));
+    expect(line).toContain('0.5 A');
+    expect(line).toContain('0.8 A');
+    expect(line.startsWith('description: "…')).toBe(true);
+  });
+
   it('describes changes in one line each', () => {
     const lines = describeChanges(diffDocuments({ tjMaxC: 150, a: [1] }, { tjMaxC: 175 }));
     expect(lines).toEqual(['a: removed (was [1 items])', 'tjMaxC: 150 → 175']);

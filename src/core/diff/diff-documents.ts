@@ -54,11 +54,23 @@ function show(value: Json): string {
   return s.length > 40 ? `${s.slice(0, 37)}…` : s;
 }
 
+/** Two long texts shown around where they first differ, so an edit near the end is visible. */
+function showTexts(before: string, after: string): [string, string] {
+  if (before.length <= 40 && after.length <= 40) return [JSON.stringify(before), JSON.stringify(after)];
+  let start = 0;
+  while (start < before.length && start < after.length && before[start] === after[start]) start++;
+  const from = Math.max(0, start - 12);
+  const cut = (t: string) => `"${from > 0 ? '…' : ''}${t.slice(from, from + 32)}${t.length > from + 32 ? '…' : ''}"`;
+  return [cut(before), cut(after)];
+}
+
 /** One line per change, for people: `devices[0].tjMaxC: 150 → 175`. */
 export function describeChanges(changes: FieldChange[]): string[] {
   return changes.map((c) =>
     c.kind === 'changed'
-      ? `${c.path}: ${show(c.before)} → ${show(c.after)}`
+      ? typeof c.before === 'string' && typeof c.after === 'string'
+        ? `${c.path}: ${showTexts(c.before, c.after).join(' → ')}`
+        : `${c.path}: ${show(c.before)} → ${show(c.after)}`
       : c.kind === 'added'
         ? `${c.path}: added ${show(c.after)}`
         : `${c.path}: removed (was ${show(c.before)})`,
