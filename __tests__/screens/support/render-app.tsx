@@ -11,7 +11,14 @@ import SignUpRoute from '../../../app/(auth)/sign-up';
 import WorkspaceLayout from '../../../app/(workspace)/_layout';
 import AccountRoute from '../../../app/(workspace)/account';
 import ActivityRoute from '../../../app/(workspace)/activity';
+import HeatsinksRoute from '../../../app/(workspace)/heatsinks';
+import HeatsinkRoute from '../../../app/(workspace)/heatsinks/[id]';
+import EditHeatsinkRoute from '../../../app/(workspace)/heatsinks/[id]/edit';
+import HeatsinkImportRoute from '../../../app/(workspace)/heatsinks/import';
+import NewHeatsinkRoute from '../../../app/(workspace)/heatsinks/new';
 import StudiesRoute from '../../../app/(workspace)/index';
+import InterfaceMaterialsRoute from '../../../app/(workspace)/interface-materials';
+import InterfaceMaterialRoute from '../../../app/(workspace)/interface-materials/[id]';
 import OutboxRoute from '../../../app/(workspace)/outbox';
 import StudyRoute from '../../../app/(workspace)/studies/[id]';
 import RevisionRoute from '../../../app/(workspace)/studies/[id]/revisions/[number]';
@@ -52,6 +59,13 @@ export function renderApp(initialUrl: string) {
       '(workspace)/team': TeamRoute,
       '(workspace)/outbox': OutboxRoute,
       '(workspace)/activity': ActivityRoute,
+      '(workspace)/heatsinks/index': HeatsinksRoute,
+      '(workspace)/heatsinks/new': NewHeatsinkRoute,
+      '(workspace)/heatsinks/import': HeatsinkImportRoute,
+      '(workspace)/heatsinks/[id]/index': HeatsinkRoute,
+      '(workspace)/heatsinks/[id]/edit': EditHeatsinkRoute,
+      '(workspace)/interface-materials/index': InterfaceMaterialsRoute,
+      '(workspace)/interface-materials/[id]/index': InterfaceMaterialRoute,
       'invitations/[token]': InvitationRoute,
       'reset-password/[token]': ResetPasswordRoute,
     },

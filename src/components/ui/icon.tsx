@@ -17,6 +17,8 @@ const paths = {
   activity: 'M9 6h11 M9 12h11 M9 18h11 M4.5 6h.01 M4.5 12h.01 M4.5 18h.01',
   chevronDown: 'M6 9l6 6 6-6',
   pin: 'M12 21s-6-5.6-6-11a6 6 0 1 1 12 0c0 5.4-6 11-6 11z M12 12.5a2.5 2.5 0 1 0 0-5 2.5 2.5 0 0 0 0 5z',
+  heatsink: 'M3 17h18v3H3z M5.5 17V7 M10 17V4 M14 17V4 M18.5 17V7',
+  interface: 'M4 4h16v5H4z M4 15h16v5H4z M6 12h12',
 } as const;
 
 export type IconName = keyof typeof paths;

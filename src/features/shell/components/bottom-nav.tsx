@@ -6,7 +6,7 @@ import { Icon, PressableLink } from '@/components/ui';
 import { color, fontFamily, fontSize, size, spacing } from '@/constants/theme';
 import { useCurrentTeam } from '@/features/team/current-team';
 
-import { navItemsFor } from '../nav-items';
+import { phoneNavItemsFor } from '../nav-items';
 
 /** Tab bar of the phone layout. */
 export function BottomNav() {
@@ -15,7 +15,7 @@ export function BottomNav() {
   const { team } = useCurrentTeam();
   return (
     <View role="navigation" aria-label="Workspace" style={[styles.bar, { paddingBottom: insets.bottom }]}>
-      {navItemsFor(team?.role).map((item) => {
+      {phoneNavItemsFor(team?.role).map((item) => {
         const active = item.matches(pathname);
         const tint = active ? color.accent : color.inkFaint;
         return (

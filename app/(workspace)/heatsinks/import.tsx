@@ -1,0 +1,3 @@
+import { HeatsinkImportScreen } from '@/features/heatsinks/heatsink-import-screen';
+
+export default HeatsinkImportScreen;

@@ -1,0 +1,3 @@
+import { HeatsinksScreen } from '@/features/heatsinks/heatsinks-screen';
+
+export default HeatsinksScreen;

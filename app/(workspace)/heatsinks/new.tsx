@@ -1,0 +1,3 @@
+import { NewHeatsinkScreen } from '@/features/heatsinks/heatsink-edit-screen';
+
+export default NewHeatsinkScreen;

@@ -1,0 +1,3 @@
+import { InterfaceImportScreen } from '@/features/interface-materials/interface-import-screen';
+
+export default InterfaceImportScreen;

@@ -1,0 +1,3 @@
+import { InterfaceMaterialsScreen } from '@/features/interface-materials/interface-materials-screen';
+
+export default InterfaceMaterialsScreen;

@@ -1,0 +1,3 @@
+import { NewInterfaceMaterialScreen } from '@/features/interface-materials/interface-edit-screen';
+
+export default NewInterfaceMaterialScreen;
