@@ -165,4 +165,4 @@ function main(argv: string[]): void {
   process.stdout.write(`${lines.join('\n')}\n`);
 }
 
-if (require.main === module && !process.env.NO_BENCH_MAIN) main(process.argv.slice(2));
+if (require.main === module) main(process.argv.slice(2));

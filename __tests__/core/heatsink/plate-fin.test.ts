@@ -46,7 +46,7 @@ describe('plateFinNaturalAtRise', () => {
     const r = plateFinNaturalAtRise(sink, 50);
     expect(r.assumptions.join(' ')).toMatch(/vertical/i);
     expect(r.assumptions.join(' ')).toMatch(/isothermal base/i);
-    expect(r.validity.map((v) => v.quantity)).toEqual(['Elenbaas number', 'Rayleigh number on the fin length', 'fin Biot number h (t/2)/k', 'fin height / spacing']);
+    expect(r.validity.map((v) => v.quantity)).toEqual(['Elenbaas number (set by the fin spacing)', 'Rayleigh number on the fin length', 'fin Biot number h (t/2)/k', 'fin height / spacing']);
     expect(r.withinRange).toBe(true);
   });
 
@@ -95,6 +95,8 @@ describe('scanFinCount', () => {
     const at = (n: number) => scan.table.find((row) => row.finCount === n)!.rsaKPerW;
     expect(at(scan.best.finCount - 3)).toBeGreaterThan(scan.best.rsaKPerW);
     expect(at(scan.best.finCount + 3)).toBeGreaterThan(scan.best.rsaKPerW);
+    expect(scan.assumptions[0]).toContain('Only the fin count varies');
+    expect(scan.withinRange).toBe(true);
   });
 });
 

@@ -73,7 +73,7 @@ export function naturalAtRise(shape: PlateFinShape, riseK: number, options: Esti
   const radiation = hr * shape.envelopeAreaM2;
 
   const checks = [
-    validity('Elenbaas number', El, ELENBAAS_RANGE[0], ELENBAAS_RANGE[1], 'range of the measurements behind the correlation (Elenbaas 1942; from memory)'),
+    validity('Elenbaas number (set by the fin spacing)', El, ELENBAAS_RANGE[0], ELENBAAS_RANGE[1], 'range of the measurements behind the correlation (Elenbaas 1942; from memory)'),
     validity('Rayleigh number on the fin length', ra, null, LAMINAR_RAYLEIGH_LIMIT, 'laminar free convection on a vertical plate (Incropera & DeWitt §9.6)'),
     validity('fin Biot number h (t/2)/k', (hChannel * t) / (2 * k), null, 0.1, 'one-dimensional fin conduction (common practice)'),
     validity('fin height / spacing', shape.finHeightM / s, 1, null, 'channels deeper than wide, so the base may be left out (common practice)'),

@@ -3,8 +3,9 @@ import { checkFinite, checkPositive } from './check';
 import { optimumPlateSpacing } from './parallel-plates';
 import { checkPlateFin, type PlateFinGeometry } from './plate-fin-geometry';
 import { naturalAtRise, type EstimateOptions } from './plate-fin-natural';
+import type { EstimateNotes } from './estimate';
 
-export type FinCountScan = {
+export type FinCountScan = EstimateNotes & {
   /** Fin count with the lowest natural-convection Rθsa at the rise, and its figures. */
   best: { finCount: number; spacingM: number; rsaKPerW: number };
   /** Every fin count that fits, in order. */
@@ -31,7 +32,20 @@ export function scanFinCount(geometry: Omit<PlateFinGeometry, 'finCount'>, riseK
     table.push({ finCount: N, spacingM: shape.spacingM, rsaKPerW: naturalAtRise(shape, riseK, options).rsaKPerW });
   }
   const best = table.reduce((a, b) => (b.rsaKPerW < a.rsaKPerW ? b : a));
+  const bestEstimate = naturalAtRise(checkPlateFin({ ...base, finCount: best.finCount }), riseK, options);
   const sOpt = optimumPlateSpacing(first.lengthM, riseK, idealGasExpansion(ambientC + riseK, ambientC), options.air ?? AIR_300K);
   const nearest = table.reduce((a, b) => (Math.abs(b.spacingM - sOpt) < Math.abs(a.spacingM - sOpt) ? b : a));
-  return { best, table, optimumSpacingM: sOpt, finCountForOptimumSpacing: nearest.finCount };
+  return {
+    best,
+    table,
+    optimumSpacingM: sOpt,
+    finCountForOptimumSpacing: nearest.finCount,
+    assumptions: [
+      'Only the fin count varies; width, length, fin height and thickness stay as given.',
+      's_opt is Bar-Cohen & Rohsenow’s result for isothermal plates; fin efficiency, radiation and the base floor move the model’s best count off it.',
+      ...bestEstimate.assumptions,
+    ],
+    validity: bestEstimate.validity,
+    withinRange: bestEstimate.withinRange,
+  };
 }

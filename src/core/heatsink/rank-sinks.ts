@@ -173,7 +173,7 @@ function rankChecked(prep: PreparedRanking, candidates: CheckedCandidate[], opti
   const passing = results.filter((r) => r.status === 'pass').sort(byKey);
   const failing = results.filter((r) => r.status === 'fail').sort((a, b) => b.worstMarginK - a.worstMarginK || a.id.localeCompare(b.id));
   const excluded = results.filter((r) => r.status === 'excluded');
-  const smallest = passing.length > 0 && passing[0].sortValue !== null ? passing[0] : passing[0] ?? null;
+  const smallest = passing[0] ?? null;
   const steadyChoice = results.filter((r) => r.steady?.passes).sort(byKey)[0] ?? null;
   let thermalMassGain: RankingResult['thermalMassGain'] = null;
   if (smallest && steadyChoice && smallest.sortValue !== null && steadyChoice.sortValue !== null && steadyChoice.sortValue > 0) {
