@@ -28,6 +28,21 @@ describe('solve command line', () => {
     expect(result.series).toBeUndefined();
   });
 
+  it('prints the SOA checks and the rail-plan summary; the map grid and SOA boundaries only with --series', () => {
+    const lab = join(root, 'examples/lab-supply-two-tap.json');
+    const brief = JSON.parse(run([lab]).stdout);
+    expect(brief.soaPasses).toBe(true);
+    expect(brief.soa.Q1.worst.vceV).toBeGreaterThan(0);
+    expect(brief.soa.Q1.boundaries).toBeUndefined();
+    expect(brief.railPlan.worst.overall.powerW).toBeGreaterThan(0);
+    expect(brief.railPlan.map).toBeUndefined();
+    expect(brief.events.some((e: { kind: string }) => e.kind === 'tap-change')).toBe(true);
+    const full = JSON.parse(run([lab, '--series']).stdout);
+    // Cells a tap cannot serve print as null (JSON has no NaN).
+    expect(full.railPlan.map.overall.powerW.flat().every((p: unknown) => p === null || typeof p === 'number')).toBe(true);
+    expect(full.soa.Q1.boundaries.atReference.condition.caseC).toBe(25);
+  });
+
   it('writes a CSV with time_s, one column per node, exact boundary rows and the peak rows', () => {
     const csv = join(work, 'out.csv');
     const { code, stdout } = run([example, '--csv', csv]);

@@ -5,7 +5,7 @@ import { csvFromTable } from './csv-table';
 /** Solved boundaries kept for --csv: every boundary of a 100,000-segment profile plus its event and chart cuts. */
 const CSV_MAX_ROWS = 400_000;
 
-const USAGE = 'usage: npm run solve -- STUDY.json [--csv OUT.csv] [--series]';
+const USAGE = 'usage: npm run solve -- STUDY.json [--csv OUT.csv] [--series]  (--series adds chart data: series, rail-plan map, SOA boundaries)';
 
 export type Io = { stdout: (text: string) => void; stderr: (text: string) => void };
 
@@ -33,10 +33,20 @@ function parseArgs(argv: string[]): Args | string {
   return file ? { file, csv, series } : 'no study file given';
 }
 
-/** Result JSON for printing: the CSV table stays out, and the chart series unless asked for. */
-function printable(result: StudyResult, series: boolean): Omit<StudyResult, 'table'> {
+/**
+ * Result JSON for printing: the CSV table stays out, and chart data (series, the rail plan's
+ * map grid, SOA boundary curves) unless asked for; the SOA checks and rail-plan summary stay.
+ */
+function printable(result: StudyResult, series: boolean): object {
   const { table: _table, series: chart, ...rest } = result;
-  return series && chart ? { ...rest, series: chart } : rest;
+  if (series) return chart ? { ...rest, series: chart } : rest;
+  const soa = Object.fromEntries(Object.entries(rest.soa).map(([id, { boundaries: _b, ...check }]) => [id, check]));
+  const summary: Record<string, unknown> = { ...rest, soa };
+  if (rest.railPlan) {
+    const { map: _map, ...plan } = rest.railPlan;
+    summary.railPlan = plan;
+  }
+  return summary;
 }
 
 /**
