@@ -75,7 +75,7 @@ export function HeatsinkForm({ initial, id, teamId, onSaved, onCancel }: Heatsin
 
   return (
     <View style={styles.form}>
-      <Text variant="heading">Name</Text>
+      <Text variant="heading">General</Text>
       {field('name', 'Name', { numeric: false })}
       {field('description', 'Description', { multiline: true })}
 
