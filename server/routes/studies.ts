@@ -8,6 +8,7 @@ import type { Study } from '../models';
 import { addComment, deleteComment, listComments } from '../services/comments-service';
 import { listReviews, reviewStudy, submitForReview } from '../services/review-service';
 import { listRevisions, restoreRevision, revisionView } from '../services/revisions-service';
+import { rankStudy } from '../services/ranking-service';
 import { solveDocument } from '../services/study-document';
 import { createStudy, deleteStudy, duplicateStudy, findStudy, listStudies, saveStudy, studyView } from '../services/studies-service';
 import { validateBody } from '../validate';
@@ -57,6 +58,17 @@ export function studiesRouter(deps: Deps) {
     const study = studyOf(res);
     if (!study.document) throw new AppError(409, 'no_document', 'This study has no study document to solve yet');
     res.json({ version: study.version, result: solveDocument(study.document) });
+  });
+
+  router.get('/:id/ranking', load, async (req, res) => {
+    const q = req.query as Record<string, string | undefined>;
+    const num = (name: string) => {
+      if (q[name] === undefined || q[name] === '') return undefined;
+      const v = Number(q[name]);
+      if (!Number.isFinite(v)) throw new AppError(400, 'validation_failed', `${name}: must be a number`, [{ path: name, message: 'must be a number' }]);
+      return v;
+    };
+    res.json(await rankStudy(db, studyOf(res), { sinkId: q.sink, sortBy: q.sort, airSpeedMPerS: num('airSpeed'), ambientC: num('ambientC'), marginK: num('marginK') }));
   });
 
   // Review

@@ -1,0 +1,82 @@
+import { createTestApp, makeTeam, makeUser, signedIn } from './test-app';
+
+let ctx: Awaited<ReturnType<typeof createTestApp>>;
+let agent: Awaited<ReturnType<typeof signedIn>>;
+let outsider: Awaited<ReturnType<typeof signedIn>>;
+let studyId: number;
+
+// One lumped device: Rjc 0.5, Rcs 0.3 K/W, 20 W for 6000 s at 25 °C ambient.
+const doc = {
+  format: 'junctura-study',
+  version: 1,
+  title: 'Rank me',
+  marginK: 20,
+  ambient: { temperatureC: 25 },
+  sinks: [{ id: 'S1', rthKPerW: 1.2, capacityJPerK: 50 }],
+  devices: [{ id: 'Q1', tjMaxC: 150, sink: 'S1', package: { kind: 'lumped', rthKPerW: 0.5 }, interface: { rthKPerW: 0.3 } }],
+  profile: { segments: [{ durationS: 6000, powerW: { Q1: 20 } }], repeat: 1 },
+};
+
+const sink = (name: string, rthKPerW: number, massKg: number, forcedAir: { airSpeedMPerS: number; rthKPerW: number }[] = []) => ({
+  name,
+  description: '',
+  rthKPerW,
+  referenceRiseK: 75,
+  forcedAir,
+  massKg,
+  material: 'aluminium' as const,
+  capacityJPerK: null,
+  widthMm: 50,
+  lengthMm: 50,
+  heightMm: 20,
+  price: massKg * 10,
+});
+
+beforeAll(async () => {
+  ctx = await createTestApp();
+  const teamId = (await makeTeam(ctx.db, 'Rank')).id;
+  const other = (await makeTeam(ctx.db, 'Other')).id;
+  await makeUser(ctx.db, 'd@rank.test', [{ teamId, role: 'designer' }]);
+  await makeUser(ctx.db, 'o@other.test', [{ teamId: other, role: 'owner' }]);
+  for (const s of [sink('Huge', 0.3, 2), sink('Medium', 1.5, 0.4), sink('Tiny', 12, 0.01), sink('Fan sink', 3, 0.2, [{ airSpeedMPerS: 1, rthKPerW: 0.5 }, { airSpeedMPerS: 2, rthKPerW: 0.3 }])]) {
+    await ctx.db.models.Heatsink.create({ ...s, teamId });
+  }
+  await ctx.db.models.Heatsink.create({ ...sink('Not ours', 0.1, 0.05), teamId: other });
+  agent = await signedIn(ctx.app, 'd@rank.test');
+  outsider = await signedIn(ctx.app, 'o@other.test');
+  studyId = (await agent.post('/api/studies').send({ title: 'Rank me', document: doc })).body.study.id;
+});
+afterAll(() => ctx.close());
+
+describe('GET /api/studies/:id/ranking', () => {
+  it("simulates only the team's own sinks and sorts the passing ones by mass", async () => {
+    const res = await agent.get(`/api/studies/${studyId}/ranking?sort=mass`);
+    expect(res.status).toBe(200);
+    expect(res.body.candidates).toBe(4);
+    const { passing, failing } = res.body.result as { passing: { name: string; massKg: number; worstMarginK: number }[]; failing: { name: string; worstMarginK: number }[] };
+    const names = [...passing, ...failing].map((c) => c.name);
+    expect(names).not.toContain('Not ours');
+    expect(failing.map((c) => c.name)).toContain('Tiny');
+    const masses = passing.map((c) => c.massKg);
+    expect(masses).toEqual([...masses].sort((a, b) => a - b));
+    for (const c of passing) expect(c.worstMarginK).toBeGreaterThanOrEqual(0);
+    for (const c of failing) expect(c.worstMarginK).toBeLessThan(0);
+  });
+
+  it('uses the forced-air point at the asked air speed: the steady state is the series sum Ta + P (Rjc + Rcs + Rsa)', async () => {
+    // Log-log interpolation is exact at a catalogue point: Rsa(2 m/s) = 0.3 K/W. Steady after
+    // 6000 s ≫ τ: 25 + 20 × (0.5 + 0.3 + 0.3) = 47 °C (thermal Ohm's law, textbook).
+    const res = await agent.get(`/api/studies/${studyId}/ranking?airSpeed=2`);
+    expect(res.status).toBe(200);
+    const all = [...res.body.result.passing, ...res.body.result.failing];
+    const fan = all.find((c: { name: string }) => c.name === 'Fan sink');
+    expect(fan.rsaKPerW).toBeCloseTo(0.3, 9);
+    expect(fan.devices[0].peakC).toBeCloseTo(47, 2);
+  });
+
+  it('answers 400 for a bad sort key or number, and 404 to other teams', async () => {
+    expect((await agent.get(`/api/studies/${studyId}/ranking?sort=colour`)).status).toBe(400);
+    expect((await agent.get(`/api/studies/${studyId}/ranking?ambientC=warm`)).body.error.details[0].path).toBe('ambientC');
+    expect((await outsider.get(`/api/studies/${studyId}/ranking`)).status).toBe(404);
+  });
+});
