@@ -1,4 +1,8 @@
 import { compileNetwork, runProfile, simulateTrapezoidal, type ModalModel } from '../core/thermal';
+import fs from 'node:fs';
+import path from 'node:path';
+import { evaluateStudy, parseStudy } from '../core/study';
+import { benchHeatsinkRanking } from './bench-heatsink';
 import { benchNetwork, benchProfile } from './bench-network';
 
 /** Segments of the timed modal run, solved in chunks so memory stays flat. */
@@ -24,6 +28,25 @@ function modalRun(model: ModalModel, chunk: Chunk, watch: number[], segments = S
     T = r.final;
   }
   return { seconds: now() - start, peak };
+}
+
+/** How long the app takes to evaluate each demo study, the "live results" case. */
+function demoStudyTimes() {
+  const dir = path.resolve(__dirname, '..', '..', 'examples');
+  return fs
+    .readdirSync(dir)
+    .filter((f) => f.endsWith('.json'))
+    .map((file) => {
+      const doc = parseStudy(JSON.parse(fs.readFileSync(path.join(dir, file), 'utf8')));
+      let best = Infinity;
+      let r = evaluateStudy(doc);
+      for (let i = 0; i < 5; i++) {
+        const t0 = now();
+        r = evaluateStudy(doc);
+        best = Math.min(best, now() - t0);
+      }
+      return { file, milliseconds: best * 1000, stretches: r.solver.stretches, method: r.solver.method };
+    });
 }
 
 function main(argv: string[]): void {
@@ -77,6 +100,9 @@ function main(argv: string[]): void {
   const trapPerSegment = trapSeconds / TRAP_SEGMENTS;
   const speedupVsTrapezoidal = trapPerSegment / (best / SEGMENTS);
 
+  const heatsinkRanking = benchHeatsinkRanking();
+  const demoStudies = demoStudyTimes();
+
   const result = {
     segments: SEGMENTS,
     nodes: spec.nodes.length,
@@ -100,7 +126,9 @@ function main(argv: string[]): void {
     peakRssMB: peakRssMB(),
     peakRssAfter100kSegmentsMB: rssAfter100k,
     peakRssAfter1MSegmentsMB: rssAfter1M,
-    targets: { segmentsPerSecond: 5e6, speedupVsTrapezoidal: 50 },
+    heatsinkRanking,
+    demoStudies,
+    targets: { segmentsPerSecond: 5e6, speedupVsTrapezoidal: 50, heatsinkRankingSeconds: heatsinkRanking.targetSeconds },
   };
   if (json) {
     process.stdout.write(`${JSON.stringify(result, null, 2)}\n`);
@@ -117,6 +145,10 @@ function main(argv: string[]): void {
     `  speed-up of the modal solver: ${f(speedupVsTrapezoidal)}× (target ≥ 50×); on the same ${TRAP_SEGMENTS} segments: ${f(result.speedupSameShortProfile)}×`,
     `Peak resident memory: ${f(rssAfter100k)} MB after 100,000 segments, ${f(rssAfter1M)} MB after 3 × 1,000,000 (the modal run works in ${CHUNK.toLocaleString('en')}-segment chunks), ${f(result.peakRssMB)} MB at the end (trapezoidal runs included)`,
   ];
+  lines.push(`Heatsink ranking: 1,000 candidate sinks × 10,000-segment profile, two devices on one sink (target < ${heatsinkRanking.targetSeconds} s)`);
+  for (const c of heatsinkRanking.cases) lines.push(`  ${c.label}: ${f(c.cpuSeconds)} s CPU (${f(c.wallSeconds)} s wall), ${c.passing} pass`);
+  lines.push('Demo studies, full evaluation as the app runs it (best of 5):');
+  for (const d of demoStudies) lines.push(`  ${d.file}: ${f(d.milliseconds)} ms, ${d.stretches} stretches, ${d.method}`);
   process.stdout.write(`${lines.join('\n')}\n`);
 }
 
