@@ -124,6 +124,8 @@ describe('password reset', () => {
 
     const signIn = await request(ctx.app).post('/api/session').send({ email: 'forgetful@amp.test', password: 'a brand new password' });
     expect(signIn.status).toBe(200);
+    const old = await request(ctx.app).post('/api/session').send({ email: 'forgetful@amp.test', password: TEST_PASSWORD });
+    expect(old.status).toBe(401);
 
     await request(ctx.app).post('/api/password-resets').send({ email: 'forgetful@amp.test' });
     const late = tokenOf(await lastLinkTo('forgetful@amp.test'));
