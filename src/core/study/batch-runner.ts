@@ -43,6 +43,8 @@ export function createBatchRunner(sm: StudyModel, observer: Observer | null, eve
   let inputs = new Float64Array(1024 * q);
   let times = new Float64Array(1024);
   let segmentOf = new Int32Array(1024);
+  /** Power of each gathered piece, for the SOA tracker. */
+  const powers: SegmentPower[] = [];
   let count = 0;
   let bucketOfChunk = -1;
   const self: BatchRunner = { T, addPiece, flush, finish, pieces: 0 };
@@ -80,6 +82,7 @@ export function createBatchRunner(sm: StudyModel, observer: Observer | null, eve
     durations[count] = h;
     times[count] = t0;
     segmentOf[count] = segmentIndex;
+    if (soa) powers[count] = p;
     count++;
     self.pieces++;
     if (observer) notePower(observer, p.partPowerW, h);
@@ -121,7 +124,7 @@ export function createBatchRunner(sm: StudyModel, observer: Observer | null, eve
     if (soa && result.boundaries) {
       for (let k = 0; k < count; k++) {
         const u = inputs.subarray(k * q, (k + 1) * q);
-        soa.stretch(model, result.boundaries.subarray(k * N, (k + 1) * N), u, times[k], durations[k], segmentOf[k], powerOf(segmentOf[k]), allOn);
+        soa.stretch(model, result.boundaries.subarray(k * N, (k + 1) * N), u, times[k], durations[k], segmentOf[k], powers[k], allOn);
       }
     }
     if (obs) {
@@ -148,7 +151,7 @@ export function createBatchRunner(sm: StudyModel, observer: Observer | null, eve
     for (let k = 0; k < count; k++) {
       const u = inputs.subarray(k * q, (k + 1) * q);
       observeStretch(obs, sm, model, T, u, times[k], durations[k], inputs[k * q + m], scratch);
-      soa?.stretch(model, T, u, times[k], durations[k], segmentOf[k], powerOf(segmentOf[k]), allOn);
+      soa?.stretch(model, T, u, times[k], durations[k], segmentOf[k], powers[k], allOn);
       advance(model, T, u, durations[k], T);
     }
     count = 0;

@@ -47,3 +47,9 @@ export const MAX_LISTED_TAP_SEGMENTS = 2000;
 
 /** Two stretches meet when their ends lie this close (relative to the time), s/s. */
 export const STRETCH_JOIN_REL_TOL = 1e-9;
+
+/**
+ * SOA: the case temperature of a stretch may be taken from the modal upper bound when that
+ * lies within this of the larger end value, K (it errs hot; the exact search runs otherwise).
+ */
+export const SOA_CASE_TOL_K = 1e-3;

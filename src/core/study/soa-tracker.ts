@@ -3,7 +3,7 @@ import type { StudyModel } from './study-model';
 import type { SegmentPower } from './segment-power';
 import { boundsFor } from './observer';
 import { createSoaAccumulator, type SoaAccumulator, type SoaStretch } from './soa-accumulator';
-import { STRETCH_JOIN_REL_TOL } from './constants';
+import { SOA_CASE_TOL_K, STRETCH_JOIN_REL_TOL } from './constants';
 
 type Open = { timeS: number; endS: number; vceV: number; icA: number; caseC: number };
 
@@ -11,8 +11,8 @@ type Open = { timeS: number; endS: number; vceV: number; icA: number; caseC: num
  * Operating points of the devices with an SOA model, gathered while the final run is solved
  * (PHYSICS.md §4): a stretch is a run of constant Vce = Vin − Vout and Ic = I/n of one part,
  * however many pieces (chart buckets, ambient steps, events) it is solved in; its case
- * temperature is the exact highest one during the stretch. Stretches without current, and
- * devices driven by powerW, have nothing to check and are left out.
+ * temperature is the highest one during the stretch, to SOA_CASE_TOL_K on the hot side.
+ * Stretches without current, and devices driven by powerW, have nothing to check and are left out.
  */
 export type SoaTracker = {
   /** Devices tracked (indices into doc.devices) and their accumulators, in device order. */
@@ -49,6 +49,16 @@ export function createSoaTracker(sm: StudyModel): SoaTracker | null {
     const drive = doc.profile.segments[segmentIndex].electrical;
     const op = power.operatingPoint;
     let loaded = false;
+    /** Highest case temperature of the piece, above `atLeast` (else atLeast): the modal bound where it is tight, else the exact search. */
+    const caseMax = (node: number, atLeast: number): number => {
+      const bounds = boundsFor(model);
+      if (!loaded) bounds.load(T, u, h);
+      loaded = true;
+      const upper = bounds.upper(node);
+      if (upper <= atLeast) return atLeast;
+      const best = upper - bounds.endMax(node) <= SOA_CASE_TOL_K ? upper : peakInSegment(model, T, u, h, node).valueC;
+      return Math.max(atLeast, best);
+    };
     devices.forEach((d, k) => {
       const conducts = drive && op && !op.outputOff && on[d] && op.partCurrentA > 0 && power.fed.includes(d);
       if (!conducts) return close(k);
@@ -58,15 +68,11 @@ export function createSoaTracker(sm: StudyModel): SoaTracker | null {
       const node = sm.case[d];
       if (o && o.vceV === vceV && o.icA === icA && Math.abs(o.endS - t) <= STRETCH_JOIN_REL_TOL * Math.max(1, t)) {
         o.endS = t + h;
-        const bounds = boundsFor(model);
-        if (!loaded) bounds.load(T, u, h);
-        loaded = true;
-        // The exact search only where the case could get hotter than the stretch has been.
-        if (bounds.upper(node) > o.caseC) o.caseC = Math.max(o.caseC, peakInSegment(model, T, u, h, node).valueC);
+        o.caseC = caseMax(node, o.caseC);
         return;
       }
       close(k);
-      open[k] = { timeS: t, endS: t + h, vceV, icA, caseC: peakInSegment(model, T, u, h, node).valueC };
+      open[k] = { timeS: t, endS: t + h, vceV, icA, caseC: caseMax(node, -Infinity) };
     });
   }
 

@@ -11,6 +11,8 @@ export type StretchBounds = {
   load(T: ArrayLike<number>, u: ArrayLike<number>, h: number): void;
   upper(node: number): number;
   lower(node: number): number;
+  /** The larger of the node's values at the two ends of the stretch (a lower bound of its maximum). */
+  endMax(node: number): number;
 };
 
 export function createStretchBounds(model: ModalModel): StretchBounds {
@@ -50,5 +52,19 @@ export function createStretchBounds(model: ModalModel): StretchBounds {
     return v;
   }
 
-  return { load, upper: (node) => bound(node, 1), lower: (node) => bound(node, -1) };
+  function endMax(node: number): number {
+    let v = 0;
+    for (let j = 0; j < q; j++) v += D[node * q + j] * uRef[j];
+    let start = 0;
+    let end = 0;
+    for (let i = 0; i < n; i++) {
+      const w = W[node * n + i];
+      v += w * xInf[i];
+      start += w * dx[i];
+      end += w * dx[i] * decay[i];
+    }
+    return v + Math.max(start, end);
+  }
+
+  return { load, upper: (node) => bound(node, 1), lower: (node) => bound(node, -1), endMax };
 }
