@@ -19,6 +19,10 @@ describe('stretch bounds', () => {
       for (let k = 0; k < nodes.length; k++) {
         const peak = peakInSegment(model, T, u, h, k).valueC;
         expect(bounds.upper(k)).toBeGreaterThanOrEqual(peak - 1e-9);
+        // The larger end value, from the exact solution at τ = 0 (massless nodes at u) and τ = h.
+        const ends = Math.max(advance(model, T, u, 0)[k], advance(model, T, u, h)[k]);
+        expect(Math.abs(bounds.endMax(k) - ends)).toBeLessThanOrEqual(1e-9 * Math.max(1, Math.abs(ends)));
+        expect(bounds.endMax(k)).toBeLessThanOrEqual(peak + 1e-9);
         for (let s = 0; s <= 20; s++) {
           const v = advance(model, T, u, (h * s) / 20)[k];
           expect(bounds.lower(k)).toBeLessThanOrEqual(v + 1e-9);
