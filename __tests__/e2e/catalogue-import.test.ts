@@ -2,7 +2,7 @@ import fs from 'node:fs';
 import os from 'node:os';
 import path from 'node:path';
 
-import type { Page } from 'playwright-core';
+import type { Locator, Page } from 'playwright-core';
 
 import { apiStudies, baseUrl, DEMO_TITLE, screenshot, signIn } from './support/app';
 import { DESKTOP, openBrowser, PHONE, type BrowserSession, type Viewport } from './support/browser';
@@ -19,6 +19,12 @@ async function apiHeatsinks(page: Page): Promise<ApiHeatsink[]> {
 async function openLibrary(page: Page, viewport: Viewport): Promise<void> {
   await page.getByRole('link', { name: viewport.width < 1024 ? 'Library' : 'Heatsinks', exact: true }).first().click();
   await page.getByRole('heading', { name: 'Heatsinks', exact: true }).waitFor();
+}
+
+/** Scrolls the app's own scroll view so the element starts at the top of the window. */
+async function scrollToTop(locator: Locator): Promise<void> {
+  await locator.waitFor();
+  await locator.evaluate((el) => el.scrollIntoView({ block: 'start' }));
 }
 
 const tmp = fs.mkdtempSync(path.join(os.tmpdir(), 'junctura-e2e-csv-'));
@@ -75,7 +81,7 @@ describe('heatsink catalogue in the browser', () => {
     // The suggestion read the units from the headers: Rθsa from "Rth (K/W)", mass in grams.
     expect(await page.getByLabel('Column for Rθsa').inputValue()).toBe('Rth (K/W)');
     expect(await page.getByLabel('Column for Mass').inputValue()).toBe('Mass (g)');
-    expect(await page.getByLabel('Forced-air column 1').inputValue()).toBe('rth_k_per_w_at_2_m_s');
+    expect(await page.getByLabel('Forced-air column 1', { exact: true }).inputValue()).toBe('rth_k_per_w_at_2_m_s');
 
     await page.getByRole('button', { name: 'Import 3 rows' }).click();
     await page.getByText('Nothing was saved.').waitFor();
@@ -124,7 +130,7 @@ describe.each([
     await verdict.waitFor();
     expect(await verdict.innerText()).toMatch(/^(Passes|Fails): /);
     await page.getByRole('img', { name: /^Heat curves: / }).waitFor();
-    await page.getByRole('heading', { name: 'Results' }).scrollIntoViewIfNeeded();
+    await scrollToTop(page.getByRole('heading', { name: 'Results' }));
     await screenshot(page, viewport, 'study-results');
 
     await openLibrary(page, viewport);
@@ -133,7 +139,7 @@ describe.each([
 
     await page.goto(`${baseUrl()}/heatsinks/import`);
     await page.locator('input[type=file]').first().setInputFiles(vendorCsv(`shot${viewport.width}`, '1.1'));
-    await page.getByRole('heading', { name: '3. Columns' }).scrollIntoViewIfNeeded();
+    await scrollToTop(page.getByRole('heading', { name: '3. Columns' }));
     await screenshot(page, viewport, 'heatsink-import-mapping');
   });
 });

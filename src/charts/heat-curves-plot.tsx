@@ -127,6 +127,19 @@ export function HeatCurvesPlot({ frame, curves, limits, tickCount, cursorS, sele
       )}
 
       {labels.map((label) => (
+        // A pale backing keeps a label readable over dense curves.
+        <Rect
+          key={`backing-${label.key}`}
+          x={label.box.x - 2}
+          y={label.box.y - 1}
+          width={label.box.width + 4}
+          height={label.box.height + 2}
+          rx={2}
+          fill={color.surface}
+          opacity={0.85}
+        />
+      ))}
+      {labels.map((label) => (
         <SvgText
           key={`label-${label.key}`}
           x={label.box.x}

@@ -39,9 +39,13 @@ export function plotLabels(frame: PlotFrame, limits: readonly LimitLine[], curve
     const px = x(c.peak!.timeS);
     const py = y(c.peak!.valueC);
     const centred = Math.min(right - width, Math.max(left, px - width / 2));
-    return [box(centred, py - 8, text), box(px - width - 8, py + 4, text), box(px + 8, py + 4, text), box(centred, py + 18, text)];
+    // Beside the marker first: a peak usually ends a rise, so the curve has left that height.
+    return [box(px + 8, py + 4, text), box(centred, py - 9, text), box(px - width - 8, py + 4, text), box(centred, py + 18, text)];
   });
-  const placed = placeLabels(options, labels.map((l) => l.box), bounds);
+  const markers = curves
+    .filter((c) => c.peak && c.peak.timeS >= t0 && c.peak.timeS <= t1)
+    .map((c): Box => ({ x: x(c.peak!.timeS) - 5, y: y(c.peak!.valueC) - 5, width: 10, height: 10 }));
+  const placed = placeLabels(options, [...labels.map((l) => l.box), ...markers], bounds);
   peaks.forEach((c, i) => {
     const b = placed[i];
     if (b) labels.push({ key: `peak-${c.key}`, text: formatTemperature(c.peak!.valueC), color: c.style.stroke, box: b });

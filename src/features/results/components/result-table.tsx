@@ -58,35 +58,43 @@ export function ResultTable<T>({ label, rows, rowKey, columns }: ResultTableProp
       </View>
     );
   }
-  return (
-    <ScrollView horizontal contentContainerStyle={styles.scroll}>
-      <View role="table" aria-label={label} style={styles.table}>
-        <View role="row" style={[styles.row, styles.header]}>
-          <View role="columnheader" style={[styles.cell, styles.sideName]}>
-            <Text variant="label" tone="muted">
-              {nameColumn.label}
-            </Text>
-          </View>
-          {rows.map((row) => (
-            <View key={rowKey(row)} role="columnheader" style={[styles.cell, styles.sideValue]}>
-              <Text variant="label">{nameColumn.cell(row).text}</Text>
-            </View>
-          ))}
+  // Up to two items share the phone's width; more scroll sideways at a fixed width each.
+  const scrolls = rows.length > 2;
+  const valueStyle = scrolls ? styles.sideFixed : styles.sideValue;
+  const table = (
+    <View role="table" aria-label={label} style={styles.table}>
+      <View role="row" style={[styles.row, styles.header]}>
+        <View role="columnheader" style={[styles.cell, styles.sideName]}>
+          <Text variant="label" tone="muted">
+            {nameColumn.label}
+          </Text>
         </View>
-        {valueColumns.map((c, i) => (
-          <View key={c.label} role="row" style={[styles.row, i < valueColumns.length - 1 && styles.divider]}>
-            <View role="rowheader" style={[styles.cell, styles.sideName]}>
-              <Text variant="caption" tone="muted">
-                {c.label}
-              </Text>
-            </View>
-            {rows.map((row) => (
-              <Cell key={rowKey(row)} cell={c.cell(row)} style={styles.sideValue} />
-            ))}
+        {rows.map((row) => (
+          <View key={rowKey(row)} role="columnheader" style={[styles.cell, valueStyle]}>
+            <Text variant="label">{nameColumn.cell(row).text}</Text>
           </View>
         ))}
       </View>
+      {valueColumns.map((c, i) => (
+        <View key={c.label} role="row" style={[styles.row, i < valueColumns.length - 1 && styles.divider]}>
+          <View role="rowheader" style={[styles.cell, styles.sideName]}>
+            <Text variant="caption" tone="muted">
+              {c.label}
+            </Text>
+          </View>
+          {rows.map((row) => (
+            <Cell key={rowKey(row)} cell={c.cell(row)} style={valueStyle} />
+          ))}
+        </View>
+      ))}
+    </View>
+  );
+  return scrolls ? (
+    <ScrollView horizontal contentContainerStyle={styles.scroll}>
+      {table}
     </ScrollView>
+  ) : (
+    table
   );
 }
 
@@ -99,7 +107,8 @@ const styles = StyleSheet.create({
   cell: { paddingHorizontal: spacing.sm, paddingVertical: spacing.xs, gap: spacing.xxs },
   flex: { flex: 1 },
   nameFlex: { flex: 1.5 },
-  // On its side: a fixed name column, value columns that share the width but scroll past three.
-  sideName: { width: 112 },
-  sideValue: { flex: 1, minWidth: 100 },
+  // On its side: a fixed name column, then value columns that share the width or scroll.
+  sideName: { width: 104 },
+  sideValue: { flex: 1 },
+  sideFixed: { width: 104 },
 });
