@@ -33,5 +33,9 @@ describe('curves CSV', () => {
   it('names the file after the study', () => {
     expect(curvesFileName('Bench electronic load (demo data)')).toBe('bench-electronic-load-demo-data-curves.csv');
     expect(curvesFileName('±°')).toBe('study-curves.csv');
+    // Cut at 60 characters without leaving a dangling hyphen.
+    expect(curvesFileName('Bench electronic load, two MOSFETs on a fan-cooled sink (demo data)')).toBe(
+      'bench-electronic-load-two-mosfets-on-a-fan-cooled-sink-demo-curves.csv',
+    );
   });
 });

@@ -27,7 +27,7 @@ export function curvesFileName(title: string): string {
     .toLowerCase()
     .normalize('NFKD')
     .replace(/[^a-z0-9]+/g, '-')
-    .replace(/^-+|-+$/g, '')
-    .slice(0, 60);
+    .slice(0, 60)
+    .replace(/^-+|-+$/g, '');
   return `${slug || 'study'}-curves.csv`;
 }
