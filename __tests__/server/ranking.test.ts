@@ -1,3 +1,5 @@
+import fs from 'node:fs';
+import path from 'node:path';
 import { createTestApp, makeTeam, makeUser, signedIn } from './test-app';
 
 let ctx: Awaited<ReturnType<typeof createTestApp>>;
@@ -72,6 +74,17 @@ describe('GET /api/studies/:id/ranking', () => {
     const fan = all.find((c: { name: string }) => c.name === 'Fan sink');
     expect(fan.rsaKPerW).toBeCloseTo(0.3, 9);
     expect(fan.devices[0].peakC).toBeCloseTo(47, 2);
+  });
+
+  it('ranks a study whose input comes from a rail plan, on the taps its evaluation selected', async () => {
+    const lab = JSON.parse(fs.readFileSync(path.join(__dirname, '../../examples/lab-supply-two-tap.json'), 'utf8'));
+    const created = await agent.post('/api/studies').send({ title: 'Lab supply', document: lab });
+    expect(created.status).toBe(201);
+    const res = await agent.get(`/api/studies/${created.body.study.id}/ranking`);
+    expect(res.status).toBe(200);
+    const all = [...res.body.result.passing, ...res.body.result.failing];
+    expect(all.length + res.body.result.excluded.length).toBe(4);
+    for (const c of all) expect(Number.isFinite(c.devices[0].peakC)).toBe(true);
   });
 
   it('answers 400 for a bad sort key or number, and 404 to other teams', async () => {

@@ -1,5 +1,5 @@
 import { rankSinks, rankingSetupFromStudy, SORT_KEYS, type RankingOptions, type SinkCandidate, type SortKey } from '../../src/core/heatsink';
-import type { StudyDocument } from '../../src/core/study';
+import { evaluateStudy, type StudyDocument } from '../../src/core/study';
 import { fedDevices, segmentPower } from '../../src/core/study/segment-power';
 import type { Db } from '../db';
 import { AppError } from '../errors';
@@ -25,14 +25,22 @@ export function candidateOf(h: Heatsink): SinkCandidate {
   };
 }
 
-/** Per-part watts of every segment, with every device on (ranking does not model shutdown). */
+/**
+ * Per-part watts of every segment, with every device on (ranking does not model shutdown).
+ * Segments fed by a rail plan take the input voltage of the tap the study's own evaluation
+ * selected for them in its first pass.
+ */
 function segmentPowers(doc: StudyDocument) {
   const on = doc.devices.map(() => true);
+  const selection = doc.railPlan ? evaluateStudy(doc, { seriesPoints: 0 }).railPlan?.selection : undefined;
   return doc.profile.segments.map((segment, i) => {
-    if ((segment as { railDrive?: unknown }).railDrive) {
-      throw new AppError(409, 'not_rankable', `profile.segments[${i}] takes its input from the rail plan: rank this study's sink with a profile of powers or electrical segments`);
+    let drive = segment;
+    if (segment.railDrive) {
+      const chosen = selection?.segments.find((s) => s.index === i);
+      if (!chosen) throw new AppError(409, 'not_rankable', `profile.segments[${i}]: the rail plan's tap for this segment is not known (the profile is too long to list); rank with a shorter profile`);
+      drive = { ...segment, electrical: { vinV: chosen.vinV, voutV: segment.railDrive.voutV, iloadA: segment.railDrive.iloadA, devices: segment.railDrive.devices } };
     }
-    const { partPowerW } = segmentPower(doc, segment, fedDevices(doc, segment), on);
+    const { partPowerW } = segmentPower(doc, drive, fedDevices(doc, drive), on);
     return { durationS: segment.durationS, powerW: Object.fromEntries(doc.devices.map((d, k) => [d.id, partPowerW[k]])) };
   });
 }

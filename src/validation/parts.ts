@@ -1,6 +1,5 @@
 import * as yup from 'yup';
-import { checkSoaModel, type SoaModel } from '../core/soa';
-import { parseElectrical, parsePackage } from '../core/study';
+import { parseElectrical, parsePackage, parseSoa } from '../core/study';
 
 export const PART_KINDS = ['regulator', 'bipolar', 'darlington', 'mosfet'] as const;
 
@@ -37,7 +36,7 @@ export const partSchema = yup
     tjMaxC: yup.number().typeError('Tj,max must be a number').min(50, 'Tj,max below 50 °C is not plausible').max(250, 'Tj,max above 250 °C is not plausible').required('Tj,max is required'),
     thermal: coreCheck('thermal', (v) => parsePackage(v, 'thermal')).required('The thermal model is required'),
     electrical: coreCheck('electrical', (v) => parseElectrical(v, 'electrical')).nullable().default(null),
-    soa: coreCheck('soa', (v) => checkSoaModel(v as SoaModel, 'soa')).nullable().default(null),
+    soa: coreCheck('soa', (v) => parseSoa(v, 'soa')).nullable().default(null),
     zthPoints: yup
       .array(
         yup.object({
