@@ -21,6 +21,7 @@ import InterfaceMaterialsRoute from '../../../app/(workspace)/interface-material
 import InterfaceMaterialRoute from '../../../app/(workspace)/interface-materials/[id]';
 import OutboxRoute from '../../../app/(workspace)/outbox';
 import StudyRoute from '../../../app/(workspace)/studies/[id]';
+import EditStudyRoute from '../../../app/(workspace)/studies/[id]/edit';
 import RevisionRoute from '../../../app/(workspace)/studies/[id]/revisions/[number]';
 import NewStudyRoute from '../../../app/(workspace)/studies/new';
 import TeamRoute from '../../../app/(workspace)/team';
@@ -55,6 +56,7 @@ export function renderApp(initialUrl: string) {
       '(workspace)/account': AccountRoute,
       '(workspace)/studies/new': NewStudyRoute,
       '(workspace)/studies/[id]': StudyRoute,
+      '(workspace)/studies/[id]/edit': EditStudyRoute,
       '(workspace)/studies/[id]/revisions/[number]': RevisionRoute,
       '(workspace)/team': TeamRoute,
       '(workspace)/outbox': OutboxRoute,

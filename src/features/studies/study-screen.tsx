@@ -1,8 +1,10 @@
+import { useRouter } from 'expo-router';
 import { StyleSheet, View } from 'react-native';
 
 import { errorMessage, errorStatus } from '@/api';
-import { Card, EmptyState, ErrorState, LoadingState, Page, Text, useIsWide } from '@/components/ui';
+import { Button, Card, EmptyState, ErrorState, LoadingState, Page, Text, useIsWide } from '@/components/ui';
 import { spacing } from '@/constants/theme';
+import { useSignedInSession } from '@/features/auth/api';
 import { CommentsPanel } from '@/features/comments/comments-panel';
 import { ReviewPanel } from '@/features/review/review-panel';
 import { HistoryPanel } from '@/features/revisions/history-panel';
@@ -14,6 +16,7 @@ import { StudyInputs } from './components/study-inputs';
 import { EstimateCaution } from './components/estimate-caution';
 import { StatusBadge } from './components/status-badge';
 import { StudyFacts } from './components/study-facts';
+import { canEditStudy } from './study-permissions';
 
 export type StudyScreenProps = { id: string };
 
@@ -21,6 +24,8 @@ export type StudyScreenProps = { id: string };
 export function StudyScreen({ id }: StudyScreenProps) {
   const wide = useIsWide();
   const study = useStudy(id);
+  const session = useSignedInSession();
+  const router = useRouter();
 
   let body;
   if (study.isPending) {
@@ -48,6 +53,7 @@ export function StudyScreen({ id }: StudyScreenProps) {
         <View style={styles.heading}>
           <StatusBadge status={data.status} />
           <Text variant={wide ? 'display' : 'title'}>{data.title}</Text>
+          {canEditStudy(session, data) ? <Button label="Edit" onPress={() => router.push(`/studies/${data.id}/edit`)} style={styles.edit} /> : null}
         </View>
         <StudyFacts study={data} />
         <ReviewPanel study={data} />
@@ -74,4 +80,5 @@ export function StudyScreen({ id }: StudyScreenProps) {
 
 const styles = StyleSheet.create({
   heading: { gap: spacing.sm },
+  edit: { alignSelf: 'flex-start' },
 });

@@ -1,0 +1,60 @@
+import { getIn } from 'formik';
+import { useEffect, useState, type RefObject } from 'react';
+
+import type { StudyDocument } from '@/core/study';
+
+import { checkDocument, type Problem } from './check-document';
+import type { FieldMeta } from './editor-context';
+import { readText } from './quantity-text';
+import type { EditorValues, RawDocument } from './types';
+
+export type EditorCheck = {
+  problems: Problem[];
+  /** The parsed document when it has no problems, and the edited object it came from. */
+  parsed: { document: StudyDocument; raw: RawDocument } | null;
+};
+
+/** How long typing may pause before the document is checked again, ms. */
+export const CHECK_DELAY_MS = 250;
+
+/**
+ * Everything wrong with the values: each numeric field whose text does not read (with the
+ * reader's reason), an empty title, and the study parser's finding, which names its field.
+ */
+export function checkValues(values: EditorValues, fields: ReadonlyMap<string, FieldMeta>): EditorCheck {
+  const problems: Problem[] = [];
+  if (values.title.trim() === '') problems.push({ field: 'title', reason: 'must not be empty' });
+  for (const [field, meta] of fields) {
+    const value: unknown = getIn(values, field);
+    if (meta.kind === undefined || typeof value !== 'string') continue;
+    const read = readText(value, meta.kind);
+    problems.push({ field, reason: read.ok ? 'is not applied yet: type it again' : read.reason });
+  }
+  const check = checkDocument(values.document);
+  if (!check.ok) {
+    if (!problems.some((p) => p.field === check.problem.field)) problems.push(check.problem);
+    return { problems, parsed: null };
+  }
+  return { problems, parsed: problems.length === 0 ? { document: check.document, raw: values.document } : null };
+}
+
+export type EditorCheckState = EditorCheck & {
+  /** The last check without problems, kept while the edits have some (for the results). */
+  lastGood: EditorCheck['parsed'];
+};
+
+/** Checks the values a moment after each change (the fields on screen are known by then). */
+export function useEditorCheck(values: EditorValues, fields: RefObject<Map<string, FieldMeta>>): EditorCheckState {
+  const [state, setState] = useState<EditorCheckState>(() => {
+    const first = checkValues(values, new Map());
+    return { ...first, lastGood: first.parsed };
+  });
+  useEffect(() => {
+    const timer = setTimeout(() => {
+      const next = checkValues(values, fields.current ?? new Map());
+      setState((prev) => ({ ...next, lastGood: next.parsed ?? prev.lastGood }));
+    }, CHECK_DELAY_MS);
+    return () => clearTimeout(timer);
+  }, [values, fields]);
+  return state;
+}
