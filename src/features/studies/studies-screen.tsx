@@ -6,6 +6,9 @@ import { errorMessage } from '@/api';
 import { Button, EmptyState, ErrorState, LoadingState, Page, Text, useIsWide } from '@/components/ui';
 import { spacing } from '@/constants/theme';
 import { teamsWhereCanCreate } from '@/features/auth/roles';
+import { ImportStudyPanel } from '@/features/study-file/components/import-study-panel';
+import { StudyFilePicker } from '@/features/study-file/components/study-file-picker';
+import { useStudyFileImport } from '@/features/study-file/use-study-file-import';
 import { useCurrentTeam } from '@/features/team/current-team';
 
 import { useStudies } from './api';
@@ -17,7 +20,7 @@ import { DEFAULT_SORT, nextSort, queryStudies, type StatusFilter, type StudySort
 export function StudiesScreen() {
   const router = useRouter();
   const wide = useIsWide();
-  const { team } = useCurrentTeam();
+  const { team, selectTeam } = useCurrentTeam();
   const canCreate = team !== null && teamsWhereCanCreate([team]).length > 0;
   const studies = useStudies();
   // The list shows the team picked in the team switcher.
@@ -35,6 +38,10 @@ export function StudiesScreen() {
   );
 
   const newStudy = canCreate ? <Button label="New study" onPress={() => router.push('/studies/new')} /> : null;
+  const importer = useStudyFileImport(team?.teamId, (study) => {
+    selectTeam(study.teamId);
+    router.push(`/studies/${study.id}`);
+  });
 
   return (
     <Page>
@@ -47,8 +54,14 @@ export function StudiesScreen() {
               : 'Design questions your teams are working on'}
           </Text>
         </View>
-        {newStudy}
+        {canCreate ? (
+          <View style={styles.actions}>
+            {newStudy}
+            <StudyFilePicker label="Import study file" onPick={importer.pick} />
+          </View>
+        ) : null}
       </View>
+      {team ? <ImportStudyPanel importer={importer} teamName={team.teamName} /> : null}
 
       {studies.isPending ? (
         <LoadingState label="Loading studies…" />
@@ -92,5 +105,6 @@ export function StudiesScreen() {
 const styles = StyleSheet.create({
   header: { flexDirection: 'row', flexWrap: 'wrap', justifyContent: 'space-between', alignItems: 'flex-end', gap: spacing.md },
   heading: { gap: spacing.xxs, flexShrink: 1 },
+  actions: { flexDirection: 'row', flexWrap: 'wrap', gap: spacing.sm },
   cards: { gap: spacing.md },
 });
