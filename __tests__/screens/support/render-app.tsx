@@ -22,6 +22,7 @@ import InterfaceMaterialRoute from '../../../app/(workspace)/interface-materials
 import OutboxRoute from '../../../app/(workspace)/outbox';
 import StudyRoute from '../../../app/(workspace)/studies/[id]';
 import EditStudyRoute from '../../../app/(workspace)/studies/[id]/edit';
+import StudyReportRoute from '../../../app/(workspace)/studies/[id]/report';
 import RevisionRoute from '../../../app/(workspace)/studies/[id]/revisions/[number]';
 import NewStudyRoute from '../../../app/(workspace)/studies/new';
 import TeamRoute from '../../../app/(workspace)/team';
@@ -57,6 +58,7 @@ export function renderApp(initialUrl: string) {
       '(workspace)/studies/new': NewStudyRoute,
       '(workspace)/studies/[id]': StudyRoute,
       '(workspace)/studies/[id]/edit': EditStudyRoute,
+      '(workspace)/studies/[id]/report': StudyReportRoute,
       '(workspace)/studies/[id]/revisions/[number]': RevisionRoute,
       '(workspace)/team': TeamRoute,
       '(workspace)/outbox': OutboxRoute,

@@ -6,6 +6,7 @@ import { Button, Card, EmptyState, ErrorState, LoadingState, Page, Text, useIsWi
 import { spacing } from '@/constants/theme';
 import { useSignedInSession } from '@/features/auth/api';
 import { CommentsPanel } from '@/features/comments/comments-panel';
+import { StudyReportActions } from '@/features/report/components/study-report-actions';
 import { ReviewPanel } from '@/features/review/review-panel';
 import { HistoryPanel } from '@/features/revisions/history-panel';
 import { StudyResults } from '@/features/results/study-results';
@@ -56,6 +57,7 @@ export function StudyScreen({ id }: StudyScreenProps) {
           {canEditStudy(session, data) ? <Button label="Edit" onPress={() => router.push(`/studies/${data.id}/edit`)} style={styles.edit} /> : null}
         </View>
         <StudyFacts study={data} />
+        <StudyReportActions study={data} />
         <ReviewPanel study={data} />
         <Card>
           <Text variant="heading">Description</Text>

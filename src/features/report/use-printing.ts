@@ -1,0 +1,4 @@
+/** Native builds do not print from the app: never printing. */
+export function usePrinting(): boolean {
+  return false;
+}
