@@ -111,7 +111,7 @@ export function SoaChart({ boundaries, points = [], onPickPoint, label, height =
           {readout}
         </Text>
       ) : null}
-      <View style={{ height }} onLayout={(e: LayoutChangeEvent) => setWidth(Math.round(e.nativeEvent.layout.width))}>
+      <View testID="soa-chart-area" style={{ height }} onLayout={(e: LayoutChangeEvent) => setWidth(Math.round(e.nativeEvent.layout.width))}>
         {frame && width > 0 ? (
           <Svg width={width} height={height} role="img" aria-label={label}>
             <Defs>

@@ -66,7 +66,7 @@ export function ZthChart({ label, points = [], pointsLabel = 'Datasheet points',
 
   return (
     <View style={styles.chart}>
-      <View style={{ height }} onLayout={(e: LayoutChangeEvent) => setWidth(Math.round(e.nativeEvent.layout.width))}>
+      <View testID="zth-chart-area" style={{ height }} onLayout={(e: LayoutChangeEvent) => setWidth(Math.round(e.nativeEvent.layout.width))}>
         {frame && width > 0 ? (
           <Svg width={width} height={height} role="img" aria-label={label}>
             <Defs>

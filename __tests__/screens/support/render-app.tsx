@@ -20,6 +20,11 @@ import StudiesRoute from '../../../app/(workspace)/index';
 import InterfaceMaterialsRoute from '../../../app/(workspace)/interface-materials';
 import InterfaceMaterialRoute from '../../../app/(workspace)/interface-materials/[id]';
 import OutboxRoute from '../../../app/(workspace)/outbox';
+import PartsRoute from '../../../app/(workspace)/parts';
+import PartRoute from '../../../app/(workspace)/parts/[id]';
+import EditPartRoute from '../../../app/(workspace)/parts/[id]/edit';
+import PartImportRoute from '../../../app/(workspace)/parts/import';
+import NewPartRoute from '../../../app/(workspace)/parts/new';
 import StudyRoute from '../../../app/(workspace)/studies/[id]';
 import EditStudyRoute from '../../../app/(workspace)/studies/[id]/edit';
 import StudyReportRoute from '../../../app/(workspace)/studies/[id]/report';
@@ -68,6 +73,11 @@ export function renderApp(initialUrl: string) {
       '(workspace)/heatsinks/import': HeatsinkImportRoute,
       '(workspace)/heatsinks/[id]/index': HeatsinkRoute,
       '(workspace)/heatsinks/[id]/edit': EditHeatsinkRoute,
+      '(workspace)/parts/index': PartsRoute,
+      '(workspace)/parts/new': NewPartRoute,
+      '(workspace)/parts/import': PartImportRoute,
+      '(workspace)/parts/[id]/index': PartRoute,
+      '(workspace)/parts/[id]/edit': EditPartRoute,
       '(workspace)/interface-materials/index': InterfaceMaterialsRoute,
       '(workspace)/interface-materials/[id]/index': InterfaceMaterialRoute,
       'invitations/[token]': InvitationRoute,

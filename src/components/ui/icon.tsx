@@ -19,6 +19,7 @@ const paths = {
   pin: 'M12 21s-6-5.6-6-11a6 6 0 1 1 12 0c0 5.4-6 11-6 11z M12 12.5a2.5 2.5 0 1 0 0-5 2.5 2.5 0 0 0 0 5z',
   heatsink: 'M3 17h18v3H3z M5.5 17V7 M10 17V4 M14 17V4 M18.5 17V7',
   interface: 'M4 4h16v5H4z M4 15h16v5H4z M6 12h12',
+  part: 'M6 3h12v5H6z M12 5.5h.01 M7 8h10v7H7z M9 15v6 M12 15v6 M15 15v6',
 } as const;
 
 export type IconName = keyof typeof paths;

@@ -3,7 +3,7 @@ import type { Role } from '@/features/auth/types';
 
 export type NavItem = {
   label: string;
-  href: '/' | '/heatsinks' | '/interface-materials' | '/team' | '/outbox' | '/activity' | '/account';
+  href: '/' | '/parts' | '/heatsinks' | '/interface-materials' | '/team' | '/outbox' | '/activity' | '/account';
   icon: IconName;
   /** Whether the item is the current section for this pathname. */
   matches: (pathname: string) => boolean;
@@ -22,6 +22,12 @@ export const NAV_ITEMS: readonly NavItem[] = [
     href: '/',
     icon: 'studies',
     matches: (pathname) => pathname === '/' || pathname.startsWith('/studies'),
+  },
+  {
+    label: 'Parts',
+    href: '/parts',
+    icon: 'part',
+    matches: (pathname) => pathname.startsWith('/parts'),
   },
   {
     label: 'Heatsinks',

@@ -1,0 +1,3 @@
+import { PartImportScreen } from '@/features/parts/part-import-screen';
+
+export default PartImportScreen;

@@ -1,0 +1,3 @@
+import { NewPartScreen } from '@/features/parts/part-edit-screen';
+
+export default NewPartScreen;
