@@ -15,6 +15,9 @@ jest.mock('@/api/client', () => ({
 
 const mockedApi = api as unknown as Record<'get' | 'post' | 'put' | 'delete', jest.Mock>;
 
+// The editor mounts every field of the study at once; on a busy machine that takes seconds.
+jest.setTimeout(20_000);
+
 async function openProfile() {
   routeApi(mockedApi, {
     'GET /session': () => ok(sessionAs('designer')),

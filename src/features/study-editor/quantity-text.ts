@@ -1,4 +1,4 @@
-import { parseQuantity, UNITS, type UnitKind } from '@/core/units';
+import { parseQuantity, UNITS, type UnitKind, type UnitSpec } from '@/core/units';
 
 /** What a numeric field takes: a physical quantity, a plain number, or a whole number. */
 export type FieldKind = UnitKind | 'number' | 'integer';
@@ -8,8 +8,8 @@ export type ReadResult = { ok: true; value: number } | { ok: false; reason: stri
 /** The unit a bare number is read in, for the field's label ("" for plain numbers). */
 export function unitOf(kind: FieldKind): string {
   if (kind === 'number' || kind === 'integer') return '';
-  const unit = UNITS[kind];
-  return 'toSi' in unit && unit.toSi !== 1 ? `k${unit.symbol}` : unit.symbol;
+  // Mass is the one unit whose SI form carries a prefix.
+  return kind === 'mass' ? 'kg' : UNITS[kind].symbol;
 }
 
 /** Reads a field's text: quantities with units and SI prefixes ("500 mA"), numbers as typed. */
@@ -38,10 +38,11 @@ const NO_LARGE_PREFIX: readonly FieldKind[] = ['time', 'heatCapacity', 'resistan
  */
 export function editText(value: number, kind: FieldKind): string {
   if (kind === 'number' || kind === 'integer') return String(Number(value.toPrecision(12)));
-  const unit = UNITS[kind];
-  const toSi = 'toSi' in unit ? unit.toSi : 1;
-  const inUnit = value / toSi;
-  if (!('prefixes' in unit) || !unit.prefixes || inUnit === 0) return `${Number(inUnit.toPrecision(12))} ${unit.symbol}`;
+  // The document and the field's label are in kilograms.
+  if (kind === 'mass') return `${Number(value.toPrecision(12))} kg`;
+  const unit: UnitSpec = UNITS[kind];
+  const inUnit = value / (unit.toSi ?? 1);
+  if (!unit.prefixes || inUnit === 0) return `${Number(inUnit.toPrecision(12))} ${unit.symbol}`;
   let exponent = Math.floor(Math.log10(Math.abs(inUnit)) / 3) * 3;
   exponent = Math.max(-12, Math.min(NO_LARGE_PREFIX.includes(kind) ? 0 : 9, exponent));
   return `${Number((inUnit / 10 ** exponent).toPrecision(12))} ${PREFIX_BY_EXPONENT[exponent]}${unit.symbol}`;

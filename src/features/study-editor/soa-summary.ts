@@ -3,10 +3,12 @@ import type { RawObject } from './types';
 const n = (v: unknown, unit: string) => (typeof v === 'number' ? `${Number(v.toPrecision(4))} ${unit}` : '—');
 const pulse = (p: unknown) => (p === 'dc' ? 'DC' : typeof p === 'number' ? (p < 1 ? `${Number((p * 1000).toPrecision(4))} ms` : `${p} s`) : '?');
 
+const TRANSISTOR_NAMES: Record<string, string> = { bipolar: 'bipolar transistor', darlington: 'Darlington', mosfet: 'MOSFET' };
+
 /** The SOA model in a few plain lines (it is entered in the parts library, shown here read-only). */
 export function soaLines(soa: RawObject): string[] {
   const lines: string[] = [];
-  const transistor = typeof soa.transistor === 'string' ? soa.transistor : 'transistor';
+  const transistor = typeof soa.transistor === 'string' ? (TRANSISTOR_NAMES[soa.transistor] ?? soa.transistor) : 'transistor';
   if (soa.kind === 'parameters') {
     lines.push(`From parameters, ${transistor}: Ic,max ${n(soa.icMaxA, 'A')}, Vceo ${n(soa.vceoV, 'V')}, Rθjc ${n(soa.rthJcKPerW, 'K/W')}, Tj,max ${n(soa.tjMaxC, '°C')}`);
     if (soa.icPulseMaxA !== undefined) lines.push(`Pulse current ${n(soa.icPulseMaxA, 'A')}`);

@@ -69,5 +69,5 @@ export function AmbientSection({ ambient = {} }: AmbientSectionProps) {
 
 const styles = StyleSheet.create({
   box: { gap: spacing.md },
-  field: { maxWidth: 240 },
+  field: { flexDirection: 'row', maxWidth: 260 },
 });

@@ -81,7 +81,7 @@ export const DeviceCard = memo(function DeviceCard({ device, index, count, sinkI
       </View>
       <View style={styles.row}>
         <QuantityField field={at(field, 'tjMaxC')} value={device.tjMaxC} kind="temperature" label="Tj,max" fullLabel={`${owner} Tj,max`} />
-        <QuantityField field={at(field, 'count')} value={device.count} kind="integer" label="In parallel" fullLabel={`${owner} count in parallel`} optional hint="Identical parts sharing the current." />
+        <QuantityField field={at(field, 'count')} value={device.count} kind="integer" label="In parallel" fullLabel={`${owner} count in parallel`} optional placeholder="1" hint="Identical parts sharing the current." />
       </View>
       <ChoiceRow
         label="Mounted on sink"

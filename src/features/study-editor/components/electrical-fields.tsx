@@ -54,7 +54,7 @@ export const ElectricalFields = memo(function ElectricalFields({ field, electric
         <ChoiceRow label="Fed by electrical segments" value={electrical.role === 'other' ? 'other' : 'pass'} options={ROLES} onChange={(role) => set(at(field, 'role'), role === 'pass' ? undefined : role)} />
       </View>
       <View style={styles.row}>
-        <QuantityField field={at(field, 'iqA')} value={electrical.iqA} kind="current" label="Iq" fullLabel={`${owner} Iq`} optional hint="Input current that does not reach the load." />
+        <QuantityField field={at(field, 'iqA')} value={electrical.iqA} kind="current" label="Iq" fullLabel={`${owner} Iq`} optional placeholder="0 A" hint="Input current that does not reach the load." />
       </View>
       <Curve field={at(field, 'dropout')} curve={electrical.dropout} title="Dropout against current" columns={DROPOUT} owner={`${owner} dropout`} />
       <Curve field={at(field, 'currentLimit')} curve={electrical.currentLimit} title="Current limit against Vin − Vout" columns={LIMIT} owner={`${owner} current limit`} />

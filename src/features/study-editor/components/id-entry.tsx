@@ -28,5 +28,5 @@ export const IdEntry = memo(function IdEntry({ field, value, label, fullLabel, o
 });
 
 const styles = StyleSheet.create({
-  field: { width: 180 },
+  field: { flexGrow: 1, flexBasis: 140, maxWidth: 220 },
 });

@@ -45,17 +45,19 @@ export const PointList = memo(function PointList({ field, points = [], columns, 
           <Text variant="mono" tone="faint" style={styles.index}>
             {i + 1}
           </Text>
-          {columns.map((c) => (
-            <QuantityField
-              key={c.key}
-              field={at(at(field, i), c.key)}
-              value={point[c.key]}
-              kind={c.kind}
-              label={c.label}
-              fullLabel={`${owner} ${noun} ${i + 1} ${c.label}`}
-              size="narrow"
-            />
-          ))}
+          <View style={styles.cells}>
+            {columns.map((c) => (
+              <QuantityField
+                key={c.key}
+                field={at(at(field, i), c.key)}
+                value={point[c.key]}
+                kind={c.kind}
+                label={c.label}
+                fullLabel={`${owner} ${noun} ${i + 1} ${c.label}`}
+                size="cell"
+              />
+            ))}
+          </View>
           <RowActions
             noun={`${owner} ${noun} ${i + 1}`}
             index={i}
@@ -86,5 +88,6 @@ const styles = StyleSheet.create({
   box: { gap: spacing.sm },
   row: { flexDirection: 'row', flexWrap: 'wrap', alignItems: 'flex-end', gap: spacing.sm, paddingBottom: spacing.sm, borderBottomWidth: 1, borderBottomColor: color.border },
   index: { width: 18, paddingBottom: spacing.md },
+  cells: { flexDirection: 'row', gap: spacing.sm, flexGrow: 1, flexShrink: 1, flexBasis: 220, maxWidth: 420 },
   add: { alignSelf: 'flex-start' },
 });

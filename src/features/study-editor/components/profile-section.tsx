@@ -46,7 +46,7 @@ export function ProfileSection({ profile = {}, deviceIds, railPlan }: ProfileSec
     <View style={styles.box}>
       <ProfilePreview profile={profile} deviceIds={stableIds} />
       <View style={styles.row}>
-        <QuantityField field="document.profile.repeat" value={profile.repeat} kind="integer" label="Passes" fullLabel="Profile passes" optional hint="Run one after the other; empty: 1." />
+        <QuantityField field="document.profile.repeat" value={profile.repeat} kind="integer" label="Passes" fullLabel="Profile passes" optional placeholder="1" hint="Run one after the other; empty: 1." />
         <View style={styles.periodic}>
           <Text variant="label" tone="muted">
             Report
@@ -58,6 +58,11 @@ export function ProfileSection({ profile = {}, deviceIds, railPlan }: ProfileSec
         </View>
       </View>
 
+      {railPlan ? (
+        <Text variant="caption" tone="muted">
+          With the rail plan, operating points give Vout and Iload: the input comes from the tap the plan selects.
+        </Text>
+      ) : null}
       <SegmentList field="document.profile.segments" items={items} deviceIds={ids} railPlan={railPlan} />
 
       <View style={styles.helpers}>

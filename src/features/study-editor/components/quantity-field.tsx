@@ -16,9 +16,11 @@ export type QuantityFieldProps = {
   fullLabel?: string;
   /** Left empty, the field is removed from the document (its default applies). */
   optional?: boolean;
+  /** What an empty optional field means ("1", "0.25"); "not set" without it. */
+  placeholder?: string;
   hint?: string;
   /** Width on a row of fields: narrow for table cells. */
-  size?: 'narrow' | 'normal' | 'grow' | 'full';
+  size?: 'cell' | 'narrow' | 'normal' | 'grow' | 'full';
 };
 
 const shown = (value: unknown, kind: FieldKind): string =>
@@ -37,7 +39,7 @@ function sameValue(text: string, value: unknown, kind: FieldKind): boolean {
  * does not read as a number stays in the document as typed, so the study is visibly not
  * ready, and the field says why.
  */
-export const QuantityField = memo(function QuantityField({ field, value, kind, label, fullLabel, optional, hint, size = 'normal' }: QuantityFieldProps) {
+export const QuantityField = memo(function QuantityField({ field, value, kind, label, fullLabel, optional, placeholder, hint, size = 'normal' }: QuantityFieldProps) {
   const { set } = useEditorActions();
   const unit = unitOf(kind);
   const title = unit ? `${label} (${unit})` : label;
@@ -78,15 +80,17 @@ export const QuantityField = memo(function QuantityField({ field, value, kind, l
         hint={hint}
         autoCapitalize="none"
         autoCorrect={false}
-        placeholder={optional ? 'not set' : undefined}
+        placeholder={optional ? (placeholder ?? 'not set') : undefined}
       />
     </View>
   );
 });
 
 const styles = StyleSheet.create({
-  narrow: { width: 124 },
-  normal: { width: 180 },
+  // Bases are widths: these sizes go in rows of fields (a basis in a column would set the height).
+  cell: { flex: 1, minWidth: 0 },
+  narrow: { flexGrow: 1, flexBasis: 100, maxWidth: 170 },
+  normal: { flexGrow: 1, flexBasis: 140, maxWidth: 260 },
   grow: { flexGrow: 1, flexBasis: 200 },
   full: { width: '100%' },
 });

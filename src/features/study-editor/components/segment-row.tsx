@@ -8,13 +8,12 @@ import { useEditorActions, useFieldError } from '../editor-context';
 import { at } from '../field-path';
 import { duplicateItem, moveItem, removeItem } from '../list-edits';
 import { isElectrical, type RawItem, type RawSegment } from '../types';
-import { ChoiceRow } from './choice-row';
 import { QuantityField } from './quantity-field';
 import { RowActions } from './row-actions';
 import { TextEntry } from './text-entry';
 
 const KINDS = [
-  { value: 'power', label: 'Power per device' },
+  { value: 'power', label: 'Power' },
   { value: 'electrical', label: 'Vin, Vout, Iload' },
 ] as const;
 
@@ -54,6 +53,17 @@ export const SegmentRow = memo(function SegmentRow({ listField, segment, index, 
         <Text variant="label" style={styles.number}>
           {name}
         </Text>
+        <View role="radiogroup" aria-label={`${name} load given as`} style={styles.kinds}>
+          {KINDS.map((k) => (
+            <Chip
+              key={k.value}
+              label={k.value === 'electrical' && railPlan ? 'Vout, Iload' : k.label}
+              selected={(electrical ? 'electrical' : 'power') === k.value}
+              onPress={() => k.value !== (electrical ? 'electrical' : 'power') && set(field, switchKind(segment, k.value, railPlan))}
+            />
+          ))}
+        </View>
+        <View style={styles.spacer} />
         <RowActions
           noun={`segment ${number}`}
           index={index}
@@ -85,11 +95,10 @@ export const SegmentRow = memo(function SegmentRow({ listField, segment, index, 
             />
           ))
         )}
-        <TextEntry field={at(field, 'label')} value={segment.label} label="Label" fullLabel={`${name} label`} optional size="grow" />
+        <TextEntry field={at(field, 'label')} value={segment.label} label="Label" fullLabel={`${name} label`} optional size="normal" />
       </View>
-      <View style={styles.foot}>
-        <ChoiceRow label="Load given as" value={electrical ? 'electrical' : 'power'} options={KINDS} onChange={(to) => to !== (electrical ? 'electrical' : 'power') && set(field, switchKind(segment, to, railPlan))} />
-        {electrical && ids.length > 1 ? (
+      {electrical && ids.length > 1 ? (
+        <View style={styles.foot}>
           <View style={styles.fed}>
             <Text variant="label" tone="muted">
               Feeds
@@ -109,12 +118,7 @@ export const SegmentRow = memo(function SegmentRow({ listField, segment, index, 
               ))}
             </View>
           </View>
-        ) : null}
-      </View>
-      {railPlan && electrical ? (
-        <Text variant="caption" tone="faint">
-          Vin comes from the tap the rail plan selects.
-        </Text>
+        </View>
       ) : null}
       {rowError ? (
         <Text variant="caption" tone="danger" role="alert">
@@ -128,9 +132,11 @@ export const SegmentRow = memo(function SegmentRow({ listField, segment, index, 
 const styles = StyleSheet.create({
   row: { gap: spacing.sm, padding: spacing.sm, borderRadius: radius.md, borderWidth: 1, borderColor: color.border, backgroundColor: color.surface },
   head: { flexDirection: 'row', flexWrap: 'wrap', alignItems: 'center', justifyContent: 'space-between', gap: spacing.xs },
-  number: { color: color.inkMuted },
+  number: { color: color.inkMuted, minWidth: 84 },
+  kinds: { flexDirection: 'row', flexWrap: 'wrap', gap: spacing.xs },
+  spacer: { flexGrow: 1 },
   fields: { flexDirection: 'row', flexWrap: 'wrap', alignItems: 'flex-start', gap: spacing.sm },
   foot: { flexDirection: 'row', flexWrap: 'wrap', gap: spacing.md },
-  fed: { gap: spacing.xs },
+  fed: { flexDirection: 'row', flexWrap: 'wrap', alignItems: 'center', gap: spacing.sm },
   chips: { flexDirection: 'row', flexWrap: 'wrap', gap: spacing.sm },
 });

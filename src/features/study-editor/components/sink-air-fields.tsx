@@ -83,6 +83,7 @@ export function SinkAirFields({ field, sink, owner }: SinkAirFieldsProps) {
                 label="Exponent"
                 fullLabel={`${owner} convection exponent`}
                 optional
+                placeholder="0.25"
                 hint="Rθsa ∝ (ΔTref/ΔT)^n; empty: 0.25 (laminar)."
               />
             </>

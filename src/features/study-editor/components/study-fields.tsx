@@ -22,6 +22,7 @@ export function StudyFields({ values }: StudyFieldsProps) {
           kind="temperatureDifference"
           label="Margin below Tj,max"
           optional
+          placeholder="20 K"
           hint="Target junction temperature = Tj,max − margin; 20–25 K is common practice. Empty: 20 K."
           size="full"
         />

@@ -47,8 +47,9 @@ export const TextEntry = memo(function TextEntry({ field, value, label, fullLabe
 });
 
 const styles = StyleSheet.create({
-  narrow: { width: 124 },
-  normal: { width: 180 },
+  // Bases are widths: these sizes go in rows of fields (a basis in a column would set the height).
+  narrow: { flexGrow: 1, flexBasis: 100, maxWidth: 170 },
+  normal: { flexGrow: 1, flexBasis: 140, maxWidth: 260 },
   grow: { flexGrow: 1, flexBasis: 200 },
   full: { width: '100%' },
 });

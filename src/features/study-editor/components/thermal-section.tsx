@@ -45,7 +45,7 @@ export function ThermalSection({ document, teamId }: ThermalSectionProps) {
             </Text>
             <View style={styles.row}>
               <QuantityField field="document.enclosure.rthKPerW" value={enclosure.rthKPerW} kind="thermalResistance" label="Rθ to the room" fullLabel="Enclosure Rθ to the room" />
-              <QuantityField field="document.enclosure.capacityJPerK" value={enclosure.capacityJPerK} kind="heatCapacity" label="Heat capacity" fullLabel="Enclosure heat capacity" optional hint="Air and walls; empty: none." />
+              <QuantityField field="document.enclosure.capacityJPerK" value={enclosure.capacityJPerK} kind="heatCapacity" label="Heat capacity" fullLabel="Enclosure heat capacity" optional placeholder="none" hint="Air and walls; empty: none." />
             </View>
             <Button label="Remove enclosure" variant="ghost" onPress={() => set('document.enclosure', undefined)} style={styles.button} />
           </>
