@@ -36,6 +36,8 @@ describe('log axis', () => {
     expect(logTicks([0.5, 200], 700).filter((t) => t.labelled).map((t) => t.value)).toEqual([0.5, 1, 2, 5, 10, 20, 50, 100, 200]);
     // 6 decades in 180 px: 30 px a decade, under the 44 px a label needs, so every second one.
     expect(logTicks([1e-5, 10], 180).filter((t) => t.labelled).map((t) => t.value)).toEqual([1e-4, 0.01, 1]);
+    // Up the side a label is one line high: 266 px / 2.6 decades = 102 px clears a 64 px threshold.
+    expect(logTicks([0.5, 200], 266, 22, 64).filter((t) => t.labelled).map((t) => t.value)).toEqual([0.5, 1, 2, 5, 10, 20, 50, 100, 200]);
   });
 
   it('still reads at two labels when the domain holds less than a decade', () => {

@@ -32,7 +32,7 @@ describe('SOA chart model', () => {
     expect(boundaryCurrentAt(dc25, 5)).toEqual({ icA: 15, limit: 'current' });
   });
 
-  it('places limit names inside the plot without covering each other', () => {
+  it('places limit names inside the plot without covering each other, each limit named once', () => {
     for (const width of [326, 900]) {
       const xs = [...dc25.segments, ...dc100.segments].flatMap((s) => s.points.map((p) => p.vceV));
       const ys = [...dc25.segments, ...dc100.segments].flatMap((s) => s.points.map((p) => p.icA));
@@ -44,6 +44,8 @@ describe('SOA chart model', () => {
         for (let j = i + 1; j < labels.length; j++) expect(overlaps(labels[i].box, labels[j].box)).toBe(false);
       }
       if (width === 900) expect(labels.filter((l) => l.key.startsWith('0-')).map((l) => l.text)).toEqual(['current', 'thermal', 'second breakdown', 'voltage']);
+      // The derated boundary has the same four limits, already named by the first.
+      expect(labels.filter((l) => l.key.startsWith('1-'))).toEqual([]);
     }
   });
 

@@ -18,8 +18,8 @@ export type LogAxesProps = {
 export function LogAxes({ frame, xTitle, yTitle, formatX, formatY }: LogAxesProps) {
   const { x, y, left, right, top, bottom } = frame;
   const xTicks = logTicks(x.domain() as [number, number], right - left);
-  // Vertical labels are one line high, so they need less room than the horizontal ones.
-  const yTicks = logTicks(y.domain() as [number, number], bottom - top, 22);
+  // Labels up the side are one line high, so they need less room than those across.
+  const yTicks = logTicks(y.domain() as [number, number], bottom - top, 22, 64);
   return (
     <G>
       {yTicks.map((t) => (

@@ -57,10 +57,10 @@ export function logDomain(min: number, max: number): [number, number] {
 /**
  * Every 1…9 × 10^k inside the domain (the minor grid of log paper). Decades are labelled
  * (every second or third one when a decade is narrower than minLabelPx); 2 and 5 as well once
- * a decade is at least LOG_LABEL_2_5_PX wide, or when the domain holds fewer than two decades
+ * a decade is at least label25Px long, or when the domain holds fewer than two decades
  * (so that an axis always reads at two marks or more).
  */
-export function logTicks(domain: readonly [number, number], lengthPx: number, minLabelPx = 44): LogTick[] {
+export function logTicks(domain: readonly [number, number], lengthPx: number, minLabelPx = 44, label25Px = LOG_LABEL_2_5_PX): LogTick[] {
   const [lo, hi] = [Math.min(...domain), Math.max(...domain)];
   checkPositive(lo, 'domain[0]');
   checkPositive(hi, 'domain[1]');
@@ -71,7 +71,7 @@ export function logTicks(domain: readonly [number, number], lengthPx: number, mi
   for (let k = Math.floor(Math.log10(lo)); k <= Math.ceil(Math.log10(hi)); k++) {
     for (let m = 1; m <= 9; m++) {
       const value = exact(m, k);
-      const labelled = m === 1 ? ((k % every) + every) % every === 0 : (m === 2 || m === 5) && perDecadePx >= LOG_LABEL_2_5_PX;
+      const labelled = m === 1 ? ((k % every) + every) % every === 0 : (m === 2 || m === 5) && perDecadePx >= label25Px;
       if (inside(value)) ticks.push({ value, decade: m === 1, labelled });
     }
   }

@@ -56,15 +56,20 @@ export const SOA_LABEL_SIZE = 11;
 /**
  * Where each segment's limit name goes: beside the longest straight piece of the segment
  * (above a flat one, left of the vertical, above-right of a sloping one, then the other side),
- * clear of other labels and markers; a label with no free place is left out. The first
- * boundary is placed first, so its labels win.
+ * clear of other labels and markers; a label with no free place is left out. Every segment of
+ * the first boundary is named; a later boundary names only the limits not named before it, so
+ * four boundaries do not stack four "voltage" labels.
  */
 export function segmentLabels(frame: LogFrame, boundaries: readonly SoaChartBoundary[], taken: readonly Box[] = []): SegmentLabel[] {
   const texts: { key: string; text: string; color: string }[] = [];
   const candidates: Box[][] = [];
   const h = SOA_LABEL_SIZE + 1;
+  const named = new Set<SoaLimit>();
   boundaries.forEach((b, bi) => {
+    const before = new Set(named);
     b.segments.forEach((seg, si) => {
+      if (bi > 0 && before.has(seg.limit)) return;
+      named.add(seg.limit);
       let best: { x0: number; y0: number; x1: number; y1: number; length: number } | null = null;
       for (let k = 0; k + 1 < seg.points.length; k++) {
         const p = seg.points[k];

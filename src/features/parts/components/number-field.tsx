@@ -16,7 +16,7 @@ export type NumberFieldProps = {
   fullLabel?: string;
   hint?: string;
   placeholder?: string;
-  size?: 'narrow' | 'normal' | 'grow';
+  size?: 'narrow' | 'normal' | 'grow' | 'full';
 };
 
 /** A number typed with its unit or an SI prefix ("2 ms", "500 mA"); the label names the bare unit. */
@@ -45,4 +45,5 @@ const styles = StyleSheet.create({
   narrow: { width: 124 },
   normal: { width: 180 },
   grow: { flexGrow: 1, flexBasis: 140, minWidth: 0 },
+  full: { width: '100%' },
 });

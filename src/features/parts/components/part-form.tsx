@@ -112,7 +112,7 @@ export function PartForm({ initial, id, teamId, onSaved, onCancel }: PartFormPro
           <View style={styles.grid}>
             {text('packageName', 'Package', { half: true })}
             <View style={[styles.field, wide && styles.half]}>
-              <NumberField label="Tj,max" unit="°C" path="tjMaxC" value={v.tjMaxC} onChange={(t) => set('tjMaxC', t)} />
+              <NumberField label="Tj,max" unit="°C" path="tjMaxC" value={v.tjMaxC} size="full" onChange={(t) => set('tjMaxC', t)} />
             </View>
           </View>
           {text('description', 'Description', { multiline: true })}

@@ -41,5 +41,5 @@ const styles = StyleSheet.create({
   header: { backgroundColor: color.surfaceMuted, borderBottomWidth: 1, borderBottomColor: color.border },
   divider: { borderBottomWidth: 1, borderBottomColor: color.border },
   cell: { flex: 1 },
-  first: { flex: 0, width: 28 },
+  first: { flexGrow: 0, flexShrink: 0, flexBasis: 28 },
 });

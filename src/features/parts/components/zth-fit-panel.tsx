@@ -91,11 +91,13 @@ export function ZthFitPanel({ current, onUse }: ZthFitPanelProps) {
             {formatTime(result.fit.maxErrorTimeS)}
           </Text>
           {result.fit.warning ? <InlineAlert tone="info" message={result.fit.warning} /> : null}
-          <ValueTable
-            label="Fitted Foster terms"
-            columns={['', 'R (K/W)', 'τ']}
-            rows={result.fit.terms.map((t, i) => [String(i + 1), formatNumber(t.rKPerW), formatTime(t.tauS)])}
-          />
+          <View style={styles.table}>
+            <ValueTable
+              label="Fitted Foster terms"
+              columns={['', 'R (K/W)', 'τ']}
+              rows={result.fit.terms.map((t, i) => [String(i + 1), formatNumber(t.rKPerW), formatTime(t.tauS)])}
+            />
+          </View>
           <ChoiceChips
             label="Time constants per decade"
             value={perDecade}
@@ -130,6 +132,7 @@ const styles = StyleSheet.create({
   panel: { gap: spacing.sm, padding: spacing.md, borderRadius: radius.md, borderWidth: 1, borderColor: color.border, backgroundColor: color.canvas },
   row: { flexDirection: 'row', flexWrap: 'wrap', gap: spacing.sm },
   result: { gap: spacing.sm },
+  table: { maxWidth: 520 },
   use: { alignSelf: 'flex-start' },
   used: { color: color.success },
 });
