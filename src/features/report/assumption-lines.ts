@@ -5,7 +5,7 @@ import { rawText } from './input-rows';
 
 export type AssumptionGroup = { title: string; lines: string[] };
 
-const percent = (fraction: number) => `${formatNumber(fraction * 100)} %`;
+const percent = (fraction: number) => formatQuantity(fraction * 100, '%');
 
 function solverLines(document: StudyDocument, result: StudyResult): string[] {
   const { solver } = result;
@@ -14,7 +14,7 @@ function solverLines(document: StudyDocument, result: StudyResult): string[] {
       ? 'The study is linear, so its stretches were solved in one batch'
       : 'Thermal shutdown or natural convection makes the study non-linear, so its stretches were solved one after another, each event or change of Rθsa ending a stretch';
   const lines = [
-    'Every stretch of constant inputs is solved exactly in modal form (PHYSICS.md §3): no time step limits the accuracy, and peaks inside a stretch are found exactly.',
+    'Every stretch of constant inputs is solved exactly, mode by mode of the thermal RC network: no time step limits the accuracy, and peaks inside a stretch are found exactly.',
     `${how}: ${solver.stretches.toLocaleString('en-GB')} stretches, ${solver.compiledModels} compiled ${solver.compiledModels === 1 ? 'network' : 'networks'}.`,
   ];
   const periodic = solver.periodic;
@@ -37,7 +37,7 @@ function sinkLines(document: StudyDocument, result: StudyResult): string[] {
       const range = result.sinks[sink.id]?.rthRangeKPerW;
       lines.push(
         `${sink.id}: natural convection, Rθsa(ΔT) = ${formatQuantity(sink.rthKPerW, 'K/W')} × (${formatQuantity(nc.referenceRiseK, 'K')} / ΔT)^${formatNumber(nc.exponent)}` +
-          ` (laminar, h ∝ ΔT^1/4, PHYSICS.md §3)${range ? `; ${formatNumber(range[0])}–${formatQuantity(range[1], 'K/W')} over the run` : ''}.`,
+          ` (laminar natural convection, h ∝ ΔT^1/4)${range ? `; ${formatNumber(range[0])}–${formatQuantity(range[1], 'K/W')} over the run` : ''}.`,
       );
     } else if (sink.forcedAir) {
       lines.push(`${sink.id}: Rθsa at ${formatQuantity(sink.forcedAir.airSpeedMPerS, 'm/s')} interpolated in log–log between the catalogue points (not extrapolated).`);
@@ -57,7 +57,7 @@ function packageLines(document: StudyDocument): string[] {
   const lines = document.devices.map((device) => {
     const model = device.package;
     if (model.kind === 'foster') {
-      return `${device.id}: the Foster set of ${model.terms.length} ${model.terms.length === 1 ? 'term' : 'terms'} is converted to a Cauer ladder with the same Zth(t) before it is chained to the sink, since a Foster set's inner nodes have no physical meaning (PHYSICS.md §3).`;
+      return `${device.id}: the Foster set of ${model.terms.length} ${model.terms.length === 1 ? 'term' : 'terms'} is converted to a Cauer ladder with the same Zth(t) before it is chained to the sink, since a Foster set's inner nodes have no physical meaning.`;
     }
     if (model.kind === 'cauer') return `${device.id}: Cauer ladder as given, junction first.`;
     return `${device.id}: one resistance and one heat capacity from junction to case.`;

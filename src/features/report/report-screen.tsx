@@ -2,8 +2,8 @@ import { useState } from 'react';
 import { StyleSheet, View } from 'react-native';
 
 import { errorMessage, errorStatus } from '@/api';
-import { EmptyState, ErrorState, InlineAlert, LoadingState, Page, Text } from '@/components/ui';
-import { spacing } from '@/constants/theme';
+import { EmptyState, ErrorState, InlineAlert, LoadingState, Page, Text, useIsWide } from '@/components/ui';
+import { color, radius, spacing } from '@/constants/theme';
 import { useStudyResult } from '@/features/results/use-study-result';
 import { useStudy } from '@/features/studies/api';
 import { BackLink } from '@/features/studies/components/back-link';
@@ -22,46 +22,49 @@ import { ReportSection } from './components/report-section';
 import { ReportToolbar } from './components/report-toolbar';
 
 function ReportBody({ study, printedAt }: { study: Study; printedAt: string }) {
+  const wide = useIsWide();
   const inputs = readStudyDocument(study.document);
   const solved = useStudyResult(study.document);
   const result = solved.kind === 'ok' ? solved.result : null;
   return (
-    <View testID="report" style={styles.report}>
+    <>
       <PrintStyles />
       <ReportToolbar study={study} result={result} />
-      <ReportHeader study={study} printedAt={printedAt} />
-      <ReportApprovals study={study} />
-      {inputs.kind === 'ok' ? (
-        <ReportInputs document={inputs.document} raw={study.document} />
-      ) : (
-        <ReportSection name="inputs" title="Inputs">
-          {inputs.kind === 'empty' ? (
-            <Text tone="muted">No design inputs have been saved in this study yet.</Text>
-          ) : (
-            <View role="alert" style={styles.invalid}>
-              <Text tone="danger">The saved document could not be read.</Text>
-              <Text variant="mono" tone="muted">
-                {inputs.message}
-              </Text>
-            </View>
-          )}
-        </ReportSection>
-      )}
-      {inputs.kind === 'ok' ? <ReportAssumptions document={inputs.document} raw={study.document} result={result} /> : null}
-      {solved.kind === 'ok' ? (
-        <ReportResults result={solved.result} />
-      ) : solved.kind === 'solving' ? (
-        <ReportSection name="results" title="Results">
-          <LoadingState label="Solving the study…" />
-        </ReportSection>
-      ) : solved.kind === 'failed' ? (
-        <ReportSection name="results" title="Results">
-          <InlineAlert message={`The study could not be solved: ${solved.message}`} />
-        </ReportSection>
-      ) : null}
-      <ReportCautions result={result} />
-      <ReportComments studyId={study.id} />
-    </View>
+      <View testID="report" style={[styles.report, wide && styles.reportWide]}>
+        <ReportHeader study={study} printedAt={printedAt} />
+        <ReportApprovals study={study} />
+        {inputs.kind === 'ok' ? (
+          <ReportInputs document={inputs.document} raw={study.document} />
+        ) : (
+          <ReportSection name="inputs" title="Inputs">
+            {inputs.kind === 'empty' ? (
+              <Text tone="muted">No design inputs have been saved in this study yet.</Text>
+            ) : (
+              <View role="alert" style={styles.invalid}>
+                <Text tone="danger">The saved document could not be read.</Text>
+                <Text variant="mono" tone="muted">
+                  {inputs.message}
+                </Text>
+              </View>
+            )}
+          </ReportSection>
+        )}
+        {inputs.kind === 'ok' ? <ReportAssumptions document={inputs.document} raw={study.document} result={result} /> : null}
+        {solved.kind === 'ok' ? (
+          <ReportResults result={solved.result} />
+        ) : solved.kind === 'solving' ? (
+          <ReportSection name="results" title="Results">
+            <LoadingState label="Solving the study…" />
+          </ReportSection>
+        ) : solved.kind === 'failed' ? (
+          <ReportSection name="results" title="Results">
+            <InlineAlert message={`The study could not be solved: ${solved.message}`} />
+          </ReportSection>
+        ) : null}
+        <ReportCautions result={result} />
+        <ReportComments studyId={study.id} />
+      </View>
+    </>
   );
 }
 
@@ -107,6 +110,15 @@ export function ReportScreen({ id }: ReportScreenProps) {
 }
 
 const styles = StyleSheet.create({
-  report: { gap: spacing.xl },
+  // The report reads as a sheet of paper; printing drops the sheet's frame.
+  report: {
+    gap: spacing.xl,
+    padding: spacing.lg,
+    backgroundColor: color.surface,
+    borderWidth: 1,
+    borderColor: color.border,
+    borderRadius: radius.lg,
+  },
+  reportWide: { padding: spacing.xxl },
   invalid: { gap: spacing.xs },
 });

@@ -1,3 +1,4 @@
+import { useIsWide } from '@/components/ui';
 import type { RailSource, Tap } from '@/core/rails';
 import type { AmbientPoint, StudyDocument } from '@/core/study';
 import { FactGrid } from '@/features/studies/components/fact-grid';
@@ -6,6 +7,7 @@ import { formatDuration, formatQuantity } from '@/features/studies/quantity-form
 
 import { deviceRows, packageTerms, segmentRows, sinkRows, type DeviceRow, type SegmentRow, type SinkRow } from '../input-rows';
 import { circuitText, railPlanFacts } from '../rail-plan-rows';
+import { usePrinting } from '../use-printing';
 import { ReportPart, ReportSection } from './report-section';
 import { ReportTable, type ReportColumn } from './report-table';
 
@@ -68,10 +70,19 @@ const TAP_COLUMNS: readonly ReportColumn<Tap & { index: number }>[] = [
   { label: 'Circuit', cell: (t) => circuitText(t.circuit), flex: 3 },
 ];
 
+/** On a phone one block per device holds it all; three tables side by side would repeat the device. */
+const PHONE_DEVICE_COLUMNS: readonly ReportColumn<DeviceRow & { terms: string }>[] = [
+  ...DEVICE_COLUMNS,
+  ...PACKAGE_COLUMNS.slice(1),
+  ...ELECTRICAL_COLUMNS.slice(1),
+];
+
 export type ReportInputsProps = { document: StudyDocument; raw: unknown };
 
 /** The design inputs in readable tables, as the solver read them (defaults filled in, groups laid out). */
 export function ReportInputs({ document, raw }: ReportInputsProps) {
+  const printing = usePrinting();
+  const wide = useIsWide() || printing;
   const devices = deviceRows(document, raw);
   const packages = devices.map((row, i) => ({ ...row, terms: packageTerms(document.devices[i].package) }));
   const targets = document.devices.map((d) => `${d.id} ${formatQuantity(d.tjMaxC - document.marginK, '°C')}`).join(', ');
@@ -92,9 +103,15 @@ export function ReportInputs({ document, raw }: ReportInputsProps) {
         ) : null}
       </ReportPart>
       <ReportPart title={document.devices.length === 1 ? 'Pass device' : 'Pass devices'}>
-        <ReportTable label="Pass devices" rows={devices} rowKey={(d) => d.id} columns={DEVICE_COLUMNS} />
-        <ReportTable label="Package models and interfaces" rows={packages} rowKey={(d) => d.id} columns={PACKAGE_COLUMNS} />
-        <ReportTable label="Electrical models" rows={devices} rowKey={(d) => d.id} columns={ELECTRICAL_COLUMNS} />
+        {wide ? (
+          <>
+            <ReportTable label="Pass devices" rows={devices} rowKey={(d) => d.id} columns={DEVICE_COLUMNS} />
+            <ReportTable label="Package models and interfaces" rows={packages} rowKey={(d) => d.id} columns={PACKAGE_COLUMNS} />
+            <ReportTable label="Electrical models" rows={devices} rowKey={(d) => d.id} columns={ELECTRICAL_COLUMNS} />
+          </>
+        ) : (
+          <ReportTable label="Pass devices" rows={packages} rowKey={(d) => d.id} columns={PHONE_DEVICE_COLUMNS} />
+        )}
       </ReportPart>
       <ReportPart title={document.sinks.length === 1 ? 'Sink' : 'Sinks'}>
         <ReportTable label="Sinks" rows={sinkRows(document)} rowKey={(s) => s.id} columns={SINK_COLUMNS} />

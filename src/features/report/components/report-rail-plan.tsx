@@ -4,6 +4,7 @@ import { FactGrid } from '@/features/studies/components/fact-grid';
 import type { Fact } from '@/features/studies/document-facts';
 import { formatQuantity } from '@/features/studies/quantity-format';
 
+import { railWarningText } from '../result-warnings';
 import { ReportPart } from './report-section';
 import { ReportTable, type ReportColumn } from './report-table';
 
@@ -61,9 +62,9 @@ export function ReportRailPlan({ rail }: ReportRailPlanProps) {
       {rail.thresholds.length > 0 ? (
         <ReportTable label="Thresholds" rows={rail.thresholds} rowKey={(t) => String(t.index)} columns={THRESHOLD_COLUMNS} noun={['threshold', 'thresholds']} />
       ) : null}
-      {[...rail.warnings, ...(rail.chatter?.message ? [rail.chatter.message] : [])].map((warning) => (
+      {rail.warnings.map((warning) => (
         <Text key={warning} variant="caption">
-          {`• ${warning}`}
+          {`• ${railWarningText(warning)}`}
         </Text>
       ))}
     </ReportPart>

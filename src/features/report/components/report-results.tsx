@@ -7,6 +7,7 @@ import { SinkTable } from '@/features/results/components/sink-table';
 import { VerdictPanel } from '@/features/results/components/verdict-panel';
 import { studyVerdict } from '@/features/results/verdict';
 
+import { generalWarnings } from '../result-warnings';
 import { ReportCurves } from './report-curves';
 import { ReportEvents } from './report-events';
 import { ReportRailPlan } from './report-rail-plan';
@@ -19,13 +20,14 @@ export type ReportResultsProps = { result: StudyResult };
 export function ReportResults({ result }: ReportResultsProps) {
   const verdict = useMemo(() => studyVerdict(result), [result]);
   const devices = useMemo(() => Object.values(result.devices), [result]);
+  const warnings = useMemo(() => generalWarnings(result), [result]);
   return (
     <ReportSection name="results" title="Results">
       {/* Every warning is listed below: the panel's own list stops after a few behind a button. */}
       <VerdictPanel verdict={verdict} warnings={[]} />
-      {result.warnings.length > 0 ? (
-        <ReportPart title={result.warnings.length === 1 ? 'Solver warning' : 'Solver warnings'}>
-          {result.warnings.map((warning) => (
+      {warnings.length > 0 ? (
+        <ReportPart title={warnings.length === 1 ? 'Solver warning' : 'Solver warnings'}>
+          {warnings.map((warning) => (
             <Text key={warning} variant="caption">
               {`• ${warning}`}
             </Text>

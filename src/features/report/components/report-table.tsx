@@ -3,6 +3,8 @@ import { StyleSheet, View } from 'react-native';
 import { Text, useIsWide } from '@/components/ui';
 import { color, fontSize, lineHeight, spacing } from '@/constants/theme';
 
+import { usePrinting } from '../use-printing';
+
 export type ReportColumn<T> = {
   label: string;
   cell: (row: T) => string;
@@ -23,11 +25,13 @@ export type ReportTableProps<T> = {
 
 /**
  * A plain table for reading and printing: rows and columns on a wide page; on a phone each
- * row becomes a short block of "label: value" lines. Long tables stop at `limit` rows and say
+ * row becomes a short block of "label: value" lines (on paper, always columns). Long tables stop at `limit` rows and say
  * how many more there are.
  */
 export function ReportTable<T>({ label, rows, rowKey, columns, limit, noun = ['row', 'rows'] }: ReportTableProps<T>) {
-  const wide = useIsWide();
+  // Paper is wide enough for the columns even when printed from a phone.
+  const printing = usePrinting();
+  const wide = useIsWide() || printing;
   const shown = limit !== undefined && rows.length > limit ? rows.slice(0, limit) : rows;
   const hidden = rows.length - shown.length;
   const [first, ...rest] = columns;
@@ -84,7 +88,7 @@ export function ReportTable<T>({ label, rows, rowKey, columns, limit, noun = ['r
 
 const styles = StyleSheet.create({
   wrap: { gap: spacing.xs },
-  table: { borderWidth: 1, borderColor: color.border },
+  table: { borderWidth: 1, borderColor: color.border, backgroundColor: color.surface },
   row: { flexDirection: 'row', alignItems: 'flex-start' },
   header: { backgroundColor: color.surfaceMuted, borderBottomWidth: 1, borderBottomColor: color.border },
   divider: { borderBottomWidth: 1, borderBottomColor: color.border },
