@@ -80,7 +80,7 @@ export function EditorForm({ study }: EditorFormProps) {
     [setFieldValue],
   );
 
-  const check = useEditorCheck(values, fields);
+  const check = useEditorCheck(values, fields, form.initialValues);
   const lastGood = check.lastGood;
 
   // A server finding holds for the values it was about, until the next edit.
@@ -139,7 +139,7 @@ export function EditorForm({ study }: EditorFormProps) {
   };
 
   const onSave = () => {
-    const now = checkValues(values, fields.current);
+    const now = checkValues(values, fields.current, form.initialValues);
     if (now.problems.length > 0) {
       openSection(now.problems[0].field);
       setSaveError(`Not saved: fix the ${now.problems.length === 1 ? 'problem' : `${now.problems.length} problems`} listed above first. Your edits are kept on this device.`);

@@ -1,4 +1,4 @@
-import { getIn } from 'formik';
+import { getIn, setIn } from 'formik';
 import { useEffect, useState, type RefObject } from 'react';
 
 import type { StudyDocument } from '@/core/study';
@@ -20,17 +20,22 @@ export const CHECK_DELAY_MS = 250;
 /**
  * Everything wrong with the values: each numeric field whose text does not read (with the
  * reader's reason), an empty title, and the study parser's finding, which names its field.
+ * The parser stops at its first finding, so fields already reported as unreadable are given
+ * their saved value (`base`) for its run, letting it report a problem further on.
  */
-export function checkValues(values: EditorValues, fields: ReadonlyMap<string, FieldMeta>): EditorCheck {
+export function checkValues(values: EditorValues, fields: ReadonlyMap<string, FieldMeta>, base?: EditorValues): EditorCheck {
   const problems: Problem[] = [];
   if (values.title.trim() === '') problems.push({ field: 'title', reason: 'must not be empty' });
+  let masked = values;
   for (const [field, meta] of fields) {
     const value: unknown = getIn(values, field);
     if (meta.kind === undefined || typeof value !== 'string') continue;
     const read = readText(value, meta.kind);
     problems.push({ field, reason: read.ok ? 'is not applied yet: type it again' : read.reason });
+    const saved: unknown = base ? getIn(base, field) : undefined;
+    if (typeof saved === 'number') masked = setIn(masked, field, saved);
   }
-  const check = checkDocument(values.document);
+  const check = checkDocument(masked.document);
   if (!check.ok) {
     if (!problems.some((p) => p.field === check.problem.field)) problems.push(check.problem);
     return { problems, parsed: null };
@@ -44,17 +49,17 @@ export type EditorCheckState = EditorCheck & {
 };
 
 /** Checks the values a moment after each change (the fields on screen are known by then). */
-export function useEditorCheck(values: EditorValues, fields: RefObject<Map<string, FieldMeta>>): EditorCheckState {
+export function useEditorCheck(values: EditorValues, fields: RefObject<Map<string, FieldMeta>>, base: EditorValues): EditorCheckState {
   const [state, setState] = useState<EditorCheckState>(() => {
     const first = checkValues(values, new Map());
     return { ...first, lastGood: first.parsed };
   });
   useEffect(() => {
     const timer = setTimeout(() => {
-      const next = checkValues(values, fields.current ?? new Map());
+      const next = checkValues(values, fields.current ?? new Map(), base);
       setState((prev) => ({ ...next, lastGood: next.parsed ?? prev.lastGood }));
     }, CHECK_DELAY_MS);
     return () => clearTimeout(timer);
-  }, [values, fields]);
+  }, [values, fields, base]);
   return state;
 }
