@@ -51,7 +51,7 @@ afterAll(() => fs.rmSync(tmp, { recursive: true, force: true }));
  * §3), in ms and °C/W as datasheets print them, from 50 µs to 5 s (25 τ of the slowest term).
  */
 function zthCsv(tag: string): { file: string; rows: number } {
-  const times = Array.from({ length: 17 }, (_, i) => 5e-5 * 10 ** (i / 4));
+  const times = Array.from({ length: 21 }, (_, i) => 5e-5 * 10 ** (i / 4));
   const lines = times.map((t) => `${(t * 1000).toPrecision(4)},${TERMS.reduce((z, x) => z + x.rKPerW * (1 - Math.exp(-t / x.tauS)), 0).toPrecision(4)}`);
   const file = path.join(tmp, `zth-${tag}.csv`);
   fs.writeFileSync(file, ['t (ms),Zth (°C/W)', ...lines].join('\n'));

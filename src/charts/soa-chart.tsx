@@ -87,7 +87,10 @@ export function SoaChart({ boundaries, points = [], onPickPoint, label, height =
   };
   const onPointerUp = (event: PointerEvent) => {
     const at = plotXY(event);
-    if (!frame || !at || !onPickPoint) return;
+    if (!frame || !at) return;
+    // A tap reads the values too: touch screens have no hover.
+    setHoverV(frame.x.invert(at.x));
+    if (!onPickPoint) return;
     const index = nearestPoint(frame, points, at.x, at.y);
     onPickPoint(index === null ? { vceV: frame.x.invert(at.x), icA: frame.y.invert(at.y) } : { vceV: points[index].vceV, icA: points[index].icA, index });
   };
@@ -96,7 +99,7 @@ export function SoaChart({ boundaries, points = [], onPickPoint, label, height =
 
   const readout =
     hoverV === null
-      ? 'Point at the chart to read the allowed current at a Vce.'
+      ? 'Point at or tap the chart to read the allowed current at a Vce.'
       : `At ${formatReading(hoverV)}\u00a0V: ${boundaries
           .map((b) => {
             const at = boundaryCurrentAt(b, hoverV);
@@ -168,7 +171,10 @@ export function SoaChart({ boundaries, points = [], onPickPoint, label, height =
             testID="soa-chart-plot"
             style={[styles.overlay, overlayWeb, { left: frame.left, top: frame.top, width: frame.right - frame.left, height: frame.bottom - frame.top }]}
             onPointerMove={onPointerMove}
-            onPointerLeave={() => setHoverV(null)}
+            onPointerLeave={(event: PointerEvent) => {
+              // A finger leaves as it lifts: keep its reading until the next tap.
+              if (event.nativeEvent.pointerType === 'mouse') setHoverV(null);
+            }}
             onPointerUp={onPointerUp}
           />
         ) : null}

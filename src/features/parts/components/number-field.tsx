@@ -16,7 +16,7 @@ export type NumberFieldProps = {
   fullLabel?: string;
   hint?: string;
   placeholder?: string;
-  size?: 'narrow' | 'normal' | 'grow' | 'full';
+  size?: 'narrow' | 'normal' | 'grow' | 'cell' | 'full';
 };
 
 /** A number typed with its unit or an SI prefix ("2 ms", "500 mA"); the label names the bare unit. */
@@ -44,6 +44,8 @@ export function NumberField({ label, unit, path, value, onChange, fullLabel, hin
 const styles = StyleSheet.create({
   narrow: { width: 124 },
   normal: { width: 180 },
-  grow: { flexGrow: 1, flexBasis: 140, minWidth: 0 },
+  grow: { flexGrow: 1, flexBasis: 140, minWidth: 0, maxWidth: 360 },
+  // Two to a row even in a phone's table.
+  cell: { flexGrow: 1, flexBasis: 84, minWidth: 0, maxWidth: 360 },
   full: { width: '100%' },
 });

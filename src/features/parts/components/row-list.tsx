@@ -53,6 +53,7 @@ export function RowList<R extends Record<string, string>>({ title, item, rows, c
                 path={`${path}[${i}].${c.key}`}
                 value={r[c.key]}
                 hint={i === 0 ? c.hint : undefined}
+                size="cell"
                 onChange={(t) => update(i, c.key, t)}
               />
             ))}

@@ -97,7 +97,7 @@ export function SoaCsvPanel({ transistor, tjMaxC, onUse }: SoaCsvPanelProps) {
 }
 
 const styles = StyleSheet.create({
-  panel: { gap: spacing.sm, padding: spacing.md, borderRadius: radius.md, borderWidth: 1, borderColor: color.border, backgroundColor: color.canvas },
+  panel: { gap: spacing.sm, padding: spacing.md, borderRadius: radius.md, borderWidth: 1, borderColor: color.borderStrong, backgroundColor: color.surface },
   row: { flexDirection: 'row', flexWrap: 'wrap', gap: spacing.sm },
   result: { gap: spacing.sm },
   use: { alignSelf: 'flex-start' },

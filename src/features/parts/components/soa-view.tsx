@@ -14,7 +14,7 @@ import type { DeratingJson, SoaJson } from '../types';
 import { ValueTable } from './value-table';
 
 const deratingText = (d: DeratingJson) =>
-  d.kind === 'linear' ? `${formatPercent(d.fractionPerK)} per K above 25 °C` : `${d.points.length} points from ${formatQuantity(d.points[0]?.caseC ?? 25, '°C')}`;
+  d.kind === 'linear' ? `${formatPercent(d.fractionPerK)} per K above 25\u00a0°C` : `${d.points.length} points from ${formatQuantity(d.points[0]?.caseC ?? 25, '°C')}`;
 
 function linearModeText(soa: SoaJson): string {
   if (!soa.linearMode) return 'No linear-mode rating';

@@ -129,7 +129,7 @@ export function ZthFitPanel({ current, onUse }: ZthFitPanelProps) {
 }
 
 const styles = StyleSheet.create({
-  panel: { gap: spacing.sm, padding: spacing.md, borderRadius: radius.md, borderWidth: 1, borderColor: color.border, backgroundColor: color.canvas },
+  panel: { gap: spacing.sm, padding: spacing.md, borderRadius: radius.md, borderWidth: 1, borderColor: color.borderStrong, backgroundColor: color.surface },
   row: { flexDirection: 'row', flexWrap: 'wrap', gap: spacing.sm },
   result: { gap: spacing.sm },
   table: { maxWidth: 520 },
