@@ -216,4 +216,48 @@ describe('parts library', () => {
     expect(puts).toBe(1);
     expect(screen.getByTestId('part-form-problems')).toHaveTextContent(/SOA, Vceo: must be at most/);
   });
+  it('imports simple parts from CSV with their Rθjc column, and holds the import until that column is chosen', async () => {
+    const preview = {
+      columns: ['Part', 'Kind', 'Tj max (°C)', 'Rth_jc (K/W)'],
+      delimiter: ',',
+      rowCount: 2,
+      firstRows: [
+        ['IP-1', 'bipolar', '150', '1.5'],
+        ['IP-2', 'mosfet', '175', '0.4'],
+      ],
+      suggestedMapping: { name: { column: 'Part' }, kind: { column: 'Kind' }, tjMaxC: { column: 'Tj max (°C)', unit: '°C' } },
+      fields: [
+        { field: 'name', label: 'Name', kind: 'text' },
+        { field: 'kind', label: 'Kind', kind: 'choice' },
+        { field: 'tjMaxC', label: 'Tj,max', kind: 'quantity', units: ['°C', 'C'], defaultUnit: '°C' },
+      ],
+    };
+    routeApi(mockedApi, {
+      'GET /session': () => ok(sessionFor('designer')),
+      'POST /parts/import/preview': () => ok(preview),
+      'POST /parts/import': () => ok({ imported: 2, teamId: 1 }, 201),
+    });
+    renderApp('/parts/import');
+
+    fireEvent.press(await screen.findByRole('button', { name: 'Choose a CSV file' }));
+    expect(await screen.findByText('IP-2')).toBeVisible();
+    // The suggestion found no Rθjc column: the import waits for it.
+    expect(screen.getByText(/Choose the column that holds Rθjc/)).toBeVisible();
+    expect(screen.getByRole('button', { name: 'Import 2 rows' })).toBeDisabled();
+
+    fireEvent.press(screen.getByRole('button', { name: 'Column for Rθjc (K/W)' }));
+    fireEvent.press(screen.getByRole('radio', { name: 'Rth_jc (K/W)' }));
+    fireEvent.press(screen.getByRole('button', { name: 'Import 2 rows' }));
+    expect(await screen.findByText('Imported 2 parts into Test Lab.')).toBeVisible();
+
+    // The server takes Rθjc as `rthJcKPerW: { column }` beside the plain fields (parts import API).
+    const form = mockedApi.post.mock.calls.find(([url]) => url === '/parts/import')![1] as FormData;
+    expect(JSON.parse(String(form.get('mapping')))).toEqual({
+      name: { column: 'Part' },
+      kind: { column: 'Kind' },
+      tjMaxC: { column: 'Tj max (°C)', unit: '°C' },
+      rthJcKPerW: { column: 'Rth_jc (K/W)' },
+    });
+    expect(form.get('teamId')).toBe('1');
+  });
 });
