@@ -1,5 +1,5 @@
 import crypto from 'node:crypto';
-import { evaluateStudy, parseStudy, type StudyDocument, type StudyResult } from '../../src/core/study';
+import { evaluateStudy, INTERACTIVE_MAX_STRETCHES, parseStudy, type StudyDocument, type StudyResult } from '../../src/core/study';
 import { AppError } from '../errors';
 
 /** The core's parser names the field as "path: reason"; the API reports it under `document.`. */
@@ -37,7 +37,7 @@ export function solveDocument(document: unknown, options: { seriesPoints?: numbe
   const doc = checkDocument(document);
   let result: StudyResult;
   try {
-    result = evaluateStudy(doc, { seriesPoints: options.seriesPoints });
+    result = evaluateStudy(doc, { seriesPoints: options.seriesPoints, maxStretches: INTERACTIVE_MAX_STRETCHES });
   } catch (err) {
     if (err instanceof RangeError || err instanceof TypeError) throw toBadRequest(err, 'document');
     throw err;

@@ -18,6 +18,15 @@ export const AMBIENT_RAMP_STEP_K = 0.05;
 /** Most segments a profile may expand to (groups × repeat). */
 export const MAX_EXPANDED_SEGMENTS = 10_000_000;
 
+/** Most shutdown trips and resumes within one constant-input piece before the run is refused. */
+export const MAX_TOGGLES_PER_PIECE = 1_000_000;
+
+/**
+ * Stretch budget of an interactive evaluation (the app's live results, the API): a few seconds
+ * of work at most; the full MAX_SOLVED_PIECES is for the command line.
+ */
+export const INTERACTIVE_MAX_STRETCHES = 100_000;
+
 /** Most constant-input pieces one evaluation may solve (events and splits included). */
 export const MAX_SOLVED_PIECES = 50_000_000;
 

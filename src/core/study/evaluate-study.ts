@@ -23,6 +23,12 @@ export type EvaluateOptions = {
   boundaryRows?: number;
   /** Natural-convection re-linearisation tolerance on Rθsa (fraction). Default CONVECTION_TOLERANCE (1 %). */
   convectionTolerance?: number;
+  /**
+   * Most constant stretches the event-driven path may solve in this evaluation (all passes and
+   * periodic iterations together) before it is refused with a RangeError; default
+   * MAX_SOLVED_PIECES. Interactive callers set a lower budget.
+   */
+  maxStretches?: number;
   /** Use the event-driven path even for a linear study (cross-checks). */
   forceEventDriven?: boolean;
 };
@@ -57,6 +63,10 @@ export function evaluateStudy(written: StudyDocument, options: EvaluateOptions =
   const rail = written.railPlan ? selectRailTaps(written) : null;
   const doc = rail ? rail.doc : written;
   const sm = createStudyModel(doc, tolerance);
+  if (options.maxStretches !== undefined) {
+    if (!(Number.isInteger(options.maxStretches) && options.maxStretches > 0)) throw new RangeError(`maxStretches: must be a positive whole number, got ${options.maxStretches}`);
+    sm.work.limit = options.maxStretches;
+  }
   const hasShutdown = doc.devices.some((d) => d.electrical?.thermalShutdown);
   const batch = !hasShutdown && sm.nonLinearSinks.length === 0 && !options.forceEventDriven;
   const ambient = ambientIntervals(doc.ambient);

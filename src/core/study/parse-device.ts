@@ -44,6 +44,14 @@ export function parseDevice(value: unknown, path: string): Device {
   const name = readOptionalString(obj, 'name', path);
   if (name !== undefined) device.name = name;
   if (obj.electrical !== undefined) device.electrical = parseElectrical(obj.electrical, fieldPath(path, 'electrical'));
+  // Without heat capacity at the junction, Tj jumps with the power: a shutdown would trip and
+  // resume at the same instant without end.
+  if (device.electrical?.thermalShutdown && device.package.kind === 'lumped' && !(device.package.capacityJPerK > 0)) {
+    rangeFail(
+      fieldPath(fieldPath(path, 'electrical'), 'thermalShutdown'),
+      'needs heat capacity at the junction: give package.capacityJPerK, or a Foster or Cauer package model (without it the shutdown would cycle infinitely fast)',
+    );
+  }
   readPart(obj, path, device);
   return device;
 }

@@ -6,7 +6,7 @@ import { boundsFor, notePower, observeStretch, sampleState, type Observer } from
 import { fedDevices, segmentPower, type SegmentPower } from './segment-power';
 import { logDriveEvents } from './drive-events';
 import type { SoaTracker } from './soa-tracker';
-import { MAX_SOLVED_PIECES } from './constants';
+import { MAX_TOGGLES_PER_PIECE } from './constants';
 
 /** Round-off allowance of the stretch bounds, K. */
 const BOUND_MARGIN_K = 1e-9;
@@ -94,6 +94,7 @@ export function createStepper(sm: StudyModel, observer: Observer | null, events:
     u[m] = ambientC;
     const end = t0 + h;
     let t = t0;
+    let toggles = 0;
     for (;;) {
       const p = updatePower(segmentIndex);
       const model = sm.modelAt(T, ambientC, rsaUsed);
@@ -117,8 +118,11 @@ export function createStepper(sm: StudyModel, observer: Observer | null, events:
           tripped = [d];
         } else if (tc === step) tripped.push(d);
       }
-      if (++self.stretches > MAX_SOLVED_PIECES) {
-        throw new RangeError(`profile: solving needs more than ${MAX_SOLVED_PIECES.toLocaleString('en')} stretches (thermal shutdown cycling too fast?); shorten the profile`);
+      ++self.stretches;
+      if (++sm.work.stretches > sm.work.limit) {
+        throw new RangeError(
+          `profile: solving needs more than ${sm.work.limit.toLocaleString('en')} constant stretches (thermal shutdown cycling, natural-convection splits and periodic passes included); shorten the profile or its repeat count`,
+        );
       }
       if (observer) {
         observeStretch(observer, sm, model, T, u, t, step, ambientC, scratch);
@@ -133,6 +137,12 @@ export function createStepper(sm: StudyModel, observer: Observer | null, events:
       const last = tripped.length === 0 && step >= end - t;
       t = last ? end : t + step;
       // The crossing was found on the exact solution, so the state flips even when rounding leaves Tj a hair short of the level.
+      if (tripped.length > 0 && ++toggles > MAX_TOGGLES_PER_PIECE) {
+        const d = tripped[0];
+        throw new RangeError(
+          `devices[${d}].electrical.thermalShutdown: trips and resumes more than ${MAX_TOGGLES_PER_PIECE.toLocaleString('en')} times within one ${h.toPrecision(3)} s segment at ${t.toPrecision(4)} s (too little heat capacity at the junction, or too narrow a hysteresis); the result would not mean anything`,
+        );
+      }
       for (const d of tripped) {
         on[d] = !on[d];
         events?.add({ kind: on[d] ? 'resume' : 'shutdown', timeS: t, device: doc.devices[d].id, junctionC: T[sm.junction[d]] });

@@ -1,3 +1,4 @@
+import { MAX_SOLVED_PIECES } from './constants';
 import { AMBIENT, compileNetwork, type CauerStage, type ModalModel, type NetworkSpec } from '../thermal';
 import type { StudyDocument } from './types';
 import { buildStudyNetwork, caseNodeId, ENCLOSURE_NODE_ID, packageStages, sinkNodeId, sinkTargetNode } from './build-network';
@@ -32,6 +33,8 @@ export type StudyModel = {
   /** Largest relative gap between the Rθsa a state calls for and `rsaUsed`. */
   rsaMismatch(temperatures: ArrayLike<number>, ambientC: number, rsaUsed: ArrayLike<number>): number;
   compiledCount(): number;
+  /** Stretches solved so far by the event-driven path over the whole evaluation, and its limit. */
+  work: { stretches: number; limit: number };
 };
 
 export function createStudyModel(doc: StudyDocument, tolerance: number): StudyModel {
@@ -101,5 +104,6 @@ export function createStudyModel(doc: StudyDocument, tolerance: number): StudyMo
     modelAt,
     rsaMismatch,
     compiledCount: () => cache.size + 1,
+    work: { stretches: 0, limit: MAX_SOLVED_PIECES },
   };
 }
