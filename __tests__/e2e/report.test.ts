@@ -47,13 +47,15 @@ describe('study file round trip and report', () => {
   let desktop: BrowserSession;
   let phone: BrowserSession;
   const downloads = fs.mkdtempSync(path.join(os.tmpdir(), 'junctura-e2e-downloads-'));
-  let importedId: number;
+  let importedId = 0;
 
   beforeAll(async () => {
     desktop = await openBrowser(DESKTOP);
     phone = await openBrowser(PHONE);
   });
   afterAll(async () => {
+    // The copy carries the demo study's title: other tests count the demo studies.
+    if (importedId > 0) await desktop?.page.request.delete(`${baseUrl()}/api/studies/${importedId}`);
     await desktop?.close();
     await phone?.close();
     fs.rmSync(downloads, { recursive: true, force: true });
