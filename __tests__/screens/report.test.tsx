@@ -171,4 +171,15 @@ describe('study report', () => {
     expect(within(comment).getByText('Pinned at 38 s')).toBeVisible();
     expect(within(comment).getByText(COMMENTS[0].body)).toBeVisible();
   });
+
+  it('names the field at fault when the saved document cannot be read, and still gives the cautions', async () => {
+    const broken = { ...DOCUMENT, devices: [{ ...DOCUMENT.devices[0], sink: 'S9' }] };
+    openReport(studyAt('draft', 3, { document: broken }));
+
+    const inputs = await screen.findByTestId('report-section-inputs');
+    // The message is the study parser's, in the form the format reference documents.
+    expect(within(inputs).getByText('devices[0].sink: no sink has the id "S9" (sinks: S1)')).toBeVisible();
+    expect(await screen.findByText('No results: the saved document could not be read (see the inputs).')).toBeVisible();
+    expect(within(screen.getByTestId('report-section-cautions')).getByText(/JEDEC JESD51-1/)).toBeVisible();
+  });
 });

@@ -60,6 +60,10 @@ function ReportBody({ study, printedAt }: { study: Study; printedAt: string }) {
           <ReportSection name="results" title="Results">
             <InlineAlert message={`The study could not be solved: ${solved.message}`} />
           </ReportSection>
+        ) : solved.kind === 'invalid' ? (
+          <ReportSection name="results" title="Results">
+            <Text tone="muted">No results: the saved document could not be read (see the inputs).</Text>
+          </ReportSection>
         ) : null}
         <ReportCautions result={result} />
         <ReportComments studyId={study.id} />
