@@ -88,6 +88,23 @@ describe('load profile editor', () => {
     expect(within(group).queryByLabelText('Segment 4.3 duration (s)')).toBeNull();
   });
 
+  it('appends a ramp as equal steps, each at the ramp’s mean over its step', async () => {
+    await openProfile();
+    fireEvent.press(screen.getByRole('button', { name: 'Ramp' }));
+    const helper = screen.getByTestId('ramp');
+    fireEvent.changeText(within(helper).getByLabelText('From (A)'), '0');
+    fireEvent.changeText(within(helper).getByLabelText('To (A)'), '8 A');
+    fireEvent.changeText(within(helper).getByLabelText('Over (s)'), '4 s');
+    fireEvent.changeText(within(helper).getByLabelText('Steps'), '4');
+    fireEvent.press(within(helper).getByRole('button', { name: 'Append ramp' }));
+
+    // The mean of a straight ramp over each quarter of 0 → 8 A: 1, 3, 5 and 7 A, 1 s each (arithmetic).
+    await waitFor(() => expect(summary()).toHaveTextContent(/^26 segments per pass, one pass 39 s/));
+    expect([4, 5, 6, 7].map((n) => screen.getByLabelText(`Segment ${n} Iload (A)`).props.value)).toEqual(['1 A', '3 A', '5 A', '7 A']);
+    expect(screen.getByLabelText('Segment 7 duration (s)')).toHaveDisplayValue('1 s');
+    expect(screen.getByLabelText('Segment 7 Vin (V)')).toHaveDisplayValue('24 V');
+  });
+
   it('says why a pulse train cannot be appended', async () => {
     await openProfile();
     fireEvent.press(screen.getByRole('button', { name: 'Pulse train' }));

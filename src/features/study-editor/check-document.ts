@@ -27,10 +27,3 @@ export function checkDocument(document: unknown): DocumentCheck {
     throw error;
   }
 }
-
-/** A field of a server 400 (`details[0].path`), already named like the form's fields. */
-export function serverProblem(details: { path?: unknown; message?: unknown }[] | undefined): Problem | null {
-  const first = details?.[0];
-  if (!first || typeof first.path !== 'string') return null;
-  return { field: first.path, reason: typeof first.message === 'string' ? first.message : 'is not accepted by the server' };
-}

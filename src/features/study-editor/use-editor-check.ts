@@ -25,8 +25,12 @@ export const CHECK_DELAY_MS = 250;
  */
 export function checkValues(values: EditorValues, fields: ReadonlyMap<string, FieldMeta>, base?: EditorValues): EditorCheck {
   const problems: Problem[] = [];
-  if (values.title.trim() === '') problems.push({ field: 'title', reason: 'must not be empty' });
   let masked = values;
+  if (values.title.trim() === '') {
+    problems.push({ field: 'title', reason: 'must not be empty' });
+    // The document's title follows the study's; one report of the empty title is enough.
+    masked = setIn(masked, 'document.title', base?.document.title || base?.title || 'untitled');
+  }
   for (const [field, meta] of fields) {
     const value: unknown = getIn(values, field);
     if (meta.kind === undefined || typeof value !== 'string') continue;
