@@ -8,11 +8,16 @@ import { spacing } from '@/constants/theme';
 
 import { DeviceTable } from './components/device-table';
 import { EventList } from './components/event-list';
+import { RailPlanPanel } from './components/rail-plan-panel';
 import { ResultSection } from './components/result-section';
 import { ResultsCaution } from './components/results-caution';
 import { SinkTable } from './components/sink-table';
+import { SoaPanel } from './components/soa-panel';
+import { TwoColumns } from './components/two-columns';
 import { VerdictPanel } from './components/verdict-panel';
 import { curvesCsv, curvesFileName } from '@/charts/curves-csv';
+import { mainsHint } from './mains-hint';
+import { shownElsewhere, soaSummary } from './soa-text';
 import { useStudyResult } from './use-study-result';
 import { studyVerdict } from './verdict';
 
@@ -23,11 +28,21 @@ export type StudyResultsProps = {
   onPickTime?: (timeS: number) => void;
 };
 
-function Solved({ result, onPickTime }: { result: StudyResult; onPickTime?: (timeS: number) => void }) {
+type SolvedProps = { result: StudyResult; mains: string | null; onPickTime?: (timeS: number) => void };
+
+function Solved({ result, mains, onPickTime }: SolvedProps) {
   const wide = useIsWide();
   const [cursorS, setCursorS] = useState<number | null>(null);
-  const verdict = useMemo(() => studyVerdict(result), [result]);
+  const verdict = useMemo(() => {
+    const v = studyVerdict(result);
+    const soa = soaSummary(result.soa);
+    return soa ? { ...v, notes: [...v.notes, soa] } : v;
+  }, [result]);
+  // Warnings the SOA and rail-plan panels show in full are not repeated above the curves.
+  const warnings = useMemo(() => result.warnings.filter((w) => !shownElsewhere(w, result.soa, Boolean(result.railPlan))), [result]);
   const devices = useMemo(() => Object.values(result.devices), [result]);
+  const hasSoa = Object.keys(result.soa).length > 0;
+  const planSink = result.railPlan ? result.sinks[result.devices[result.railPlan.device]?.sink ?? ''] : undefined;
   const [saveError, setSaveError] = useState<string | null>(null);
 
   const download = async () => {
@@ -41,7 +56,7 @@ function Solved({ result, onPickTime }: { result: StudyResult; onPickTime?: (tim
 
   return (
     <>
-      <VerdictPanel verdict={verdict} warnings={result.warnings} />
+      <VerdictPanel verdict={verdict} warnings={warnings} />
       <ResultSection title="Heat curves">
         <HeatCurvesChart
           result={result}
@@ -58,13 +73,32 @@ function Solved({ result, onPickTime }: { result: StudyResult; onPickTime?: (tim
       <ResultSection title={devices.length === 1 ? 'Device' : 'Devices'}>
         <DeviceTable devices={devices} />
       </ResultSection>
-      <ResultSection title="Sinks">
-        <SinkTable result={result} />
-      </ResultSection>
-      <ResultSection title="Events">
-        <EventList events={result.events} counts={result.eventCounts} selectedS={cursorS} onSelect={setCursorS} />
-      </ResultSection>
-      <ResultsCaution hotSinks={Object.values(result.sinks)} />
+      <TwoColumns firstShare={0.45}>
+        {[
+          <ResultSection key="sinks" title="Sinks">
+            <SinkTable result={result} />
+          </ResultSection>,
+          <ResultSection key="events" title="Events">
+            <EventList events={result.events} counts={result.eventCounts} selectedS={cursorS} onSelect={setCursorS} />
+          </ResultSection>,
+        ]}
+      </TwoColumns>
+      {hasSoa ? (
+        <ResultSection title="Safe operating area">
+          <SoaPanel soa={result.soa} selectedS={cursorS} onSelectTime={setCursorS} />
+        </ResultSection>
+      ) : null}
+      {result.railPlan ? (
+        <ResultSection title="Rail plan">
+          <RailPlanPanel
+            plan={result.railPlan}
+            sink={planSink}
+            selectedS={cursorS}
+            onSelectTime={setCursorS}
+          />
+        </ResultSection>
+      ) : null}
+      <ResultsCaution hotSinks={Object.values(result.sinks)} mains={mains} />
     </>
   );
 }
@@ -72,6 +106,7 @@ function Solved({ result, onPickTime }: { result: StudyResult; onPickTime?: (tim
 /** The study's answer, solved in the client: verdict, heat curves, per-device and per-sink peaks, events. */
 export function StudyResults({ document, onPickTime }: StudyResultsProps) {
   const state = useStudyResult(document);
+  const mains = useMemo(() => mainsHint(document), [document]);
   if (state.kind === 'empty') return null;
   return (
     <Card style={styles.card}>
@@ -79,7 +114,7 @@ export function StudyResults({ document, onPickTime }: StudyResultsProps) {
       {state.kind === 'solving' ? <LoadingState label="Solving the study…" /> : null}
       {state.kind === 'invalid' ? <Text tone="muted">No results: the saved document could not be read (see the design inputs).</Text> : null}
       {state.kind === 'failed' ? <InlineAlert message={`The study could not be solved: ${state.message}`} /> : null}
-      {state.kind === 'ok' ? <Solved result={state.result} onPickTime={onPickTime} /> : null}
+      {state.kind === 'ok' ? <Solved result={state.result} mains={mains} onPickTime={onPickTime} /> : null}
     </Card>
   );
 }
