@@ -8,6 +8,7 @@ import { useSignedInSession } from '@/features/auth/api';
 import { CommentsPanel } from '@/features/comments/comments-panel';
 import { StudyReportActions } from '@/features/report/components/study-report-actions';
 import { ReviewPanel } from '@/features/review/review-panel';
+import { RankingPanel } from '@/features/heatsinks/components/ranking-panel';
 import { HistoryPanel } from '@/features/revisions/history-panel';
 import { StudyResults } from '@/features/results/study-results';
 
@@ -64,6 +65,7 @@ export function StudyScreen({ id }: StudyScreenProps) {
           <Text tone={data.description ? 'default' : 'muted'}>{data.description || 'No description.'}</Text>
         </Card>
         <StudyResults document={data.document} />
+        <RankingPanel study={data} />
         <StudyInputs document={data.document} />
         <CommentsPanel study={data} />
         <HistoryPanel study={data} />
@@ -73,7 +75,7 @@ export function StudyScreen({ id }: StudyScreenProps) {
   }
 
   return (
-    <Page width="readable">
+    <Page width="content">
       <BackLink href="/" label="Studies" />
       {body}
     </Page>
