@@ -14,6 +14,7 @@ import ActivityRoute from '../../../app/(workspace)/activity';
 import HeatsinksRoute from '../../../app/(workspace)/heatsinks';
 import HeatsinkRoute from '../../../app/(workspace)/heatsinks/[id]';
 import EditHeatsinkRoute from '../../../app/(workspace)/heatsinks/[id]/edit';
+import HeatsinkDesignRoute from '../../../app/(workspace)/heatsinks/design';
 import HeatsinkImportRoute from '../../../app/(workspace)/heatsinks/import';
 import NewHeatsinkRoute from '../../../app/(workspace)/heatsinks/new';
 import StudiesRoute from '../../../app/(workspace)/index';
@@ -71,6 +72,7 @@ export function renderApp(initialUrl: string) {
       '(workspace)/heatsinks/index': HeatsinksRoute,
       '(workspace)/heatsinks/new': NewHeatsinkRoute,
       '(workspace)/heatsinks/import': HeatsinkImportRoute,
+      '(workspace)/heatsinks/design': HeatsinkDesignRoute,
       '(workspace)/heatsinks/[id]/index': HeatsinkRoute,
       '(workspace)/heatsinks/[id]/edit': EditHeatsinkRoute,
       '(workspace)/parts/index': PartsRoute,

@@ -1,8 +1,9 @@
+import { useRouter } from 'expo-router';
 import { useMemo, useState } from 'react';
 import { StyleSheet, View } from 'react-native';
 
 import { errorMessage } from '@/api';
-import { EmptyState, ErrorState, LoadingState, Page, Text, TextField, useIsWide } from '@/components/ui';
+import { Button, EmptyState, ErrorState, LoadingState, Page, Text, TextField, useIsWide } from '@/components/ui';
 import { spacing } from '@/constants/theme';
 import { CatalogueActions } from '@/features/catalogues/components/catalogue-actions';
 import { CatalogueTabs } from '@/features/catalogues/components/catalogue-tabs';
@@ -20,6 +21,7 @@ const demoLine = (demo: number, all: number) => (demo === 0 ? '' : demo === all 
 /** The team's heatsink library: a table on a wide window, cards on a phone. */
 export function HeatsinksScreen() {
   const wide = useIsWide();
+  const router = useRouter();
   const { team, memberships } = useCurrentTeam();
   const heatsinks = useHeatsinks(team?.teamId);
   const canEdit = canEditCatalogue(memberships, team?.teamId);
@@ -40,14 +42,17 @@ export function HeatsinksScreen() {
               : 'The team’s catalogue of sinks, with Rθsa in still air and forced air'}
           </Text>
         </View>
-        <CatalogueActions
-          resource="heatsinks"
-          teamId={team?.teamId}
-          canEdit={canEdit}
-          newLabel="New heatsink"
-          newHref="/heatsinks/new"
-          importHref="/heatsinks/import"
-        />
+        <View style={styles.actions}>
+          <CatalogueActions
+            resource="heatsinks"
+            teamId={team?.teamId}
+            canEdit={canEdit}
+            newLabel="New heatsink"
+            newHref="/heatsinks/new"
+            importHref="/heatsinks/import"
+          />
+          <Button label="Design from geometry" variant="secondary" onPress={() => router.push('/heatsinks/design')} style={styles.design} />
+        </View>
       </View>
 
       {heatsinks.isPending ? (
@@ -100,6 +105,8 @@ export function HeatsinksScreen() {
 const styles = StyleSheet.create({
   header: { flexDirection: 'row', flexWrap: 'wrap', justifyContent: 'space-between', alignItems: 'flex-end', gap: spacing.md },
   heading: { gap: spacing.xxs, flexShrink: 1 },
+  actions: { flexDirection: 'row', flexWrap: 'wrap', alignItems: 'flex-start', gap: spacing.sm, maxWidth: '100%' },
+  design: { alignSelf: 'flex-start' },
   filters: { gap: spacing.md },
   filtersWide: { flexDirection: 'row', alignItems: 'flex-end', gap: spacing.xl },
   search: { width: 320 },

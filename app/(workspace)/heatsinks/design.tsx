@@ -1,0 +1,3 @@
+import { SinkDesignScreen } from '@/features/heatsinks/sink-design-screen';
+
+export default SinkDesignScreen;
