@@ -1,6 +1,6 @@
 import { useEffect, useState } from 'react';
 
-import { evaluateStudy, parseStudy, type StudyDocument, type StudyResult } from '@/core/study';
+import { evaluateStudy, INTERACTIVE_MAX_STRETCHES, parseStudy, type StudyDocument, type StudyResult } from '@/core/study';
 
 export type StudyResultState =
   | { kind: 'empty' }
@@ -29,7 +29,7 @@ function solve(raw: unknown): Outcome {
     return { kind: 'invalid', message: messageOf(error) };
   }
   try {
-    return { kind: 'ok', document, result: evaluateStudy(document) };
+    return { kind: 'ok', document, result: evaluateStudy(document, { maxStretches: INTERACTIVE_MAX_STRETCHES }) };
   } catch (error) {
     return { kind: 'failed', message: messageOf(error) };
   }

@@ -1,6 +1,6 @@
 import { useEffect, useState } from 'react';
 
-import { evaluateStudy, type StudyDocument } from '@/core/study';
+import { evaluateStudy, INTERACTIVE_MAX_STRETCHES, type StudyDocument } from '@/core/study';
 import { studyVerdict, type Verdict } from '@/features/results/verdict';
 
 export type LiveVerdict =
@@ -18,7 +18,7 @@ export function useLiveVerdict(document: StudyDocument | null, enabled: boolean)
     if (!enabled || document === null) return;
     const timer = setTimeout(() => {
       try {
-        const result = evaluateStudy(document, { seriesPoints: 0 });
+        const result = evaluateStudy(document, { seriesPoints: 0, maxStretches: INTERACTIVE_MAX_STRETCHES });
         setState({ kind: 'ok', verdict: studyVerdict(result), warnings: result.warnings, document });
       } catch (error) {
         setState({ kind: 'failed', message: error instanceof Error ? error.message : String(error), document });
