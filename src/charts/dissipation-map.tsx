@@ -67,7 +67,7 @@ export function DissipationMap({ voutV, ioutA, powerW, status, tap, tapNames = [
   const ready = width > 0;
   const at = (event: PointerEvent) => cellAt(voutV, ioutA, frame.x.invert(event.nativeEvent.offsetX + frame.left), frame.y.invert(event.nativeEvent.offsetY + frame.top));
   const readout = (() => {
-    if (!hover) return 'Point at the map to read the dissipation at an output.';
+    if (!hover) return 'Point at or tap the map to read the dissipation at an output.';
     const p = powerW[hover.v]?.[hover.i] ?? null;
     const s = status[hover.v]?.[hover.i] ?? 'not-served';
     const k = tap?.[hover.v]?.[hover.i] ?? -1;
@@ -174,6 +174,7 @@ export function DissipationMap({ voutV, ioutA, powerW, status, tap, tapNames = [
           <View
             testID="dissipation-map-plot"
             style={[styles.overlay, overlayWeb, { left: frame.left, top: frame.top, width: frame.right - frame.left, height: frame.bottom - frame.top }]}
+            onPointerDown={(e) => setHover(at(e))}
             onPointerMove={(e) => setHover(at(e))}
             onPointerLeave={() => setHover(null)}
           />

@@ -1,7 +1,7 @@
 import { useMemo, useState } from 'react';
 import { StyleSheet, View } from 'react-native';
 
-import { Card, Chip, InlineAlert, Text } from '@/components/ui';
+import { Card, Chip, InlineAlert, Text, useIsWide } from '@/components/ui';
 import type { SinkMaterial } from '@/core/heatsink';
 import { spacing } from '@/constants/theme';
 import { TwoColumns } from '@/features/results/components/two-columns';
@@ -50,6 +50,7 @@ export function FlatPlateDesign() {
   const [material, setMaterial] = useState<SinkMaterial>(DEMO_FLAT_PLATE_MATERIAL);
   const [faces, setFaces] = useState<1 | 2>(2);
   const [condition, setCondition] = useState(DEMO_PLATE_CONDITION);
+  const wide = useIsWide();
   const outcome = useMemo(() => estimateFlatPlate(texts, material, faces, condition), [texts, material, faces, condition]);
   const errors = outcome.ok ? {} : outcome.errors;
 
@@ -77,6 +78,9 @@ export function FlatPlateDesign() {
       <Text variant="heading">Conditions</Text>
       <NaturalConditionFields value={condition} onChange={setCondition} errors={errors} />
       {errors.form ? <InlineAlert message={errors.form} /> : null}
+      {!wide && outcome.ok ? (
+        <Text variant="bodyStrong" tone="accent">{`Rθsa in still air ${formatQuantity(outcome.estimate.natural.rsaKPerW, 'K/W')}: the estimate follows below.`}</Text>
+      ) : null}
     </Card>
   );
   const result = (

@@ -2,7 +2,7 @@ import { useMemo, useState } from 'react';
 import { StyleSheet, View } from 'react-native';
 
 import { FinScanChart } from '@/charts/fin-scan-chart';
-import { Card, Chip, InlineAlert, Text } from '@/components/ui';
+import { Card, Chip, InlineAlert, Text, useIsWide } from '@/components/ui';
 import type { SinkMaterial } from '@/core/heatsink';
 import { spacing } from '@/constants/theme';
 import { TwoColumns } from '@/features/results/components/two-columns';
@@ -102,6 +102,7 @@ export function PlateFinDesign() {
   const [texts, setTexts] = useState<Record<PlateFinKey, string>>(DEMO_PLATE_FIN);
   const [material, setMaterial] = useState<SinkMaterial>(DEMO_PLATE_FIN_MATERIAL);
   const [condition, setCondition] = useState(DEMO_CONDITION);
+  const wide = useIsWide();
   const outcome = useMemo(() => estimatePlateFin(texts, material, condition), [texts, material, condition]);
   const errors = outcome.ok ? {} : outcome.errors;
   const defaultName = `Custom extrusion ${texts.baseWidth} × ${texts.length} mm, ${texts.finCount} fins (estimate)`;
@@ -121,6 +122,9 @@ export function PlateFinDesign() {
       <Text variant="heading">Conditions</Text>
       <NaturalConditionFields value={condition} onChange={setCondition} errors={errors} withSpeeds />
       {errors.form ? <InlineAlert message={errors.form} /> : null}
+      {!wide && outcome.ok ? (
+        <Text variant="bodyStrong" tone="accent">{`Rθsa in still air ${formatQuantity(outcome.estimate.natural.rsaKPerW, 'K/W')}: the estimate follows below.`}</Text>
+      ) : null}
     </Card>
   );
   const result = (
