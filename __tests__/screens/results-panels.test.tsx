@@ -18,6 +18,9 @@ jest.mock('@/api/client', () => ({
 
 const mockedApi = api as unknown as Record<'get' | 'post' | 'delete', jest.Mock>;
 
+// Solving the demo studies and waiting out the ranking's typing pause take longer than jest's 5 s default.
+jest.setTimeout(30_000);
+
 const example = (name: string) => JSON.parse(fs.readFileSync(path.join(__dirname, '../../examples', `${name}.json`), 'utf8'));
 const NB = '\u00a0';
 const sig3 = (v: number) => String(Number(v.toPrecision(3)));
