@@ -18,7 +18,7 @@ jest.mock('@/api/client', () => ({
 
 const mockedApi = api as unknown as Record<'get' | 'post' | 'delete', jest.Mock>;
 
-// Solving the demo studies and waiting out the ranking's typing pause take longer than jest's 5 s default.
+// Solving a demo study takes longer than jest's 5 s default on a busy machine.
 jest.setTimeout(30_000);
 
 const example = (name: string) => JSON.parse(fs.readFileSync(path.join(__dirname, '../../examples', `${name}.json`), 'utf8'));
