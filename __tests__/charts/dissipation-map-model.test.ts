@@ -39,6 +39,8 @@ describe('dissipation map model', () => {
       { x0: 5, y0: 0.5, x1: 15, y1: 0.5 },
     ]);
     expect(tapRegions([[0, 0], [0, 1], [1, 1]], [0, 10, 20], 2)).toEqual([{ fromV: -5, toV: 15 }, { fromV: 5, toV: 25 }]);
+    // Above the taps' capability no tap serves (−1): that edge is no boundary between taps.
+    expect(tapBoundaries([[0, -1], [1, -1]], [0, 10], [0, 1])).toEqual([{ x0: 5, y0: -0.5, x1: 5, y1: 0.5 }]);
   });
 
   it('puts the lab supply’s tap boundary inside the hysteresis band around its threshold', () => {

@@ -64,8 +64,8 @@ export type BoundaryEdge = { x0: number; y0: number; x1: number; y1: number };
 
 /**
  * Edges where the tap giving the highest power changes between neighbouring cells, in data
- * units (V across, A up), for drawing the tap boundaries. Cells no tap serves (−1) do not
- * start a boundary against each other.
+ * units (V across, A up), for drawing the tap boundaries. Cells no tap serves (−1) draw none:
+ * their own marks already set them apart.
  */
 export function tapBoundaries(tap: readonly (readonly number[])[], voutV: readonly number[], ioutA: readonly number[]): BoundaryEdge[] {
   const xe = cellEdges(voutV);
@@ -74,13 +74,14 @@ export function tapBoundaries(tap: readonly (readonly number[])[], voutV: readon
   for (let v = 0; v < voutV.length; v++) {
     for (let i = 0; i < ioutA.length; i++) {
       const here = tap[v]?.[i] ?? -1;
+      if (here < 0) continue;
       if (v + 1 < voutV.length) {
         const right = tap[v + 1]?.[i] ?? -1;
-        if (right !== here) edges.push({ x0: xe[v + 1], y0: ye[i], x1: xe[v + 1], y1: ye[i + 1] });
+        if (right >= 0 && right !== here) edges.push({ x0: xe[v + 1], y0: ye[i], x1: xe[v + 1], y1: ye[i + 1] });
       }
       if (i + 1 < ioutA.length) {
         const above = tap[v]?.[i + 1] ?? -1;
-        if (above !== here) edges.push({ x0: xe[v], y0: ye[i + 1], x1: xe[v + 1], y1: ye[i + 1] });
+        if (above >= 0 && above !== here) edges.push({ x0: xe[v], y0: ye[i + 1], x1: xe[v + 1], y1: ye[i + 1] });
       }
     }
   }
