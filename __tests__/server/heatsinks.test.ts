@@ -40,6 +40,14 @@ describe('heatsink catalogue', () => {
     expect((await outsider.get('/api/heatsinks')).body.items).toEqual([]);
   });
 
+  it('records edits in the team activity log', async () => {
+    const created = await designer.post('/api/heatsinks').send({ name: 'Logged sink', rthKPerW: 2 });
+    const edited = await designer.put(`/api/heatsinks/${created.body.item.id}`).send({ name: 'Logged sink, longer', rthKPerW: 1.8 });
+    expect(edited.status).toBe(200);
+    const events = await ctx.db.models.AuditEvent.findAll({ where: { subjectId: created.body.item.id }, order: [['id', 'ASC']] });
+    expect(events.map((e) => e.action)).toEqual(['heatsink.created', 'heatsink.updated']);
+  });
+
   it('answers 400 naming each bad field', async () => {
     const res = await designer.post('/api/heatsinks').send({ name: '', rthKPerW: -2, material: 'steel', forcedAir: [{ airSpeedMPerS: 0, rthKPerW: 1 }] });
     expect(res.status).toBe(400);

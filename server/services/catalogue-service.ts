@@ -30,6 +30,7 @@ export type CatalogueKind<V> = {
 type Row = Model & { id: number; teamId: number };
 
 export function catalogueService<V>(kind: CatalogueKind<V>) {
+  const action = (verb: string) => `${kind.noun.toLowerCase().replace(/ /g, '_')}.${verb}`;
   const modelOf = (db: Db) => kind.modelOf(db) as unknown as ModelStatic<Row>;
 
   async function list(db: Db, auth: SessionView, teamId?: number) {
@@ -67,7 +68,7 @@ export function catalogueService<V>(kind: CatalogueKind<V>) {
     const { teamId: _ignored, ...values } = validate(input);
     const row = await db.sequelize.transaction(async (transaction) => {
       const r = await modelOf(db).create({ ...values, teamId: m.teamId } as never, { transaction });
-      await recordEvent(db, { teamId: m.teamId, actorId: auth.user.id, action: `${kind.noun.toLowerCase().replace(/ /g, '_')}.created`, subjectId: r.id, details: { name: values.name } }, transaction);
+      await recordEvent(db, { teamId: m.teamId, actorId: auth.user.id, action: action('created'), subjectId: r.id, details: { name: values.name } }, transaction);
       return r;
     });
     return kind.view(row);
@@ -77,7 +78,10 @@ export function catalogueService<V>(kind: CatalogueKind<V>) {
     const row = await find(db, auth, id);
     requireRole(membershipIn(auth, row.teamId), EDITOR_ROLES, `Reviewers cannot edit the ${kind.noun.toLowerCase()} catalogue`);
     const { teamId: _ignored, ...values } = validate(input);
-    await row.update(values as never);
+    await db.sequelize.transaction(async (transaction) => {
+      await row.update(values as never, { transaction });
+      await recordEvent(db, { teamId: row.teamId, actorId: auth.user.id, action: action('updated'), subjectId: row.id, details: { name: values.name } }, transaction);
+    });
     return kind.view(row);
   }
 
@@ -85,7 +89,7 @@ export function catalogueService<V>(kind: CatalogueKind<V>) {
     const row = await find(db, auth, id);
     requireRole(membershipIn(auth, row.teamId), EDITOR_ROLES, `Reviewers cannot edit the ${kind.noun.toLowerCase()} catalogue`);
     await db.sequelize.transaction(async (transaction) => {
-      await recordEvent(db, { teamId: row.teamId, actorId: auth.user.id, action: `${kind.noun.toLowerCase().replace(/ /g, '_')}.deleted`, subjectId: row.id }, transaction);
+      await recordEvent(db, { teamId: row.teamId, actorId: auth.user.id, action: action('deleted'), subjectId: row.id }, transaction);
       await row.destroy({ transaction });
     });
   }
@@ -138,7 +142,7 @@ export function catalogueService<V>(kind: CatalogueKind<V>) {
     }
     await db.sequelize.transaction(async (transaction) => {
       await modelOf(db).bulkCreate(values.map((v) => ({ ...v, teamId: m.teamId })) as never[], { transaction });
-      await recordEvent(db, { teamId: m.teamId, actorId: auth.user.id, action: `${kind.noun.toLowerCase().replace(/ /g, '_')}.imported`, details: { rows: values.length } }, transaction);
+      await recordEvent(db, { teamId: m.teamId, actorId: auth.user.id, action: action('imported'), details: { rows: values.length } }, transaction);
     });
     return { imported: values.length, teamId: m.teamId };
   }

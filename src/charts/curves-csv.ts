@@ -21,13 +21,18 @@ export function curvesCsv(series: Record<string, Series>): string {
   return `${lines.join('\n')}\n`;
 }
 
-/** A file name from the study title: "bench-load-curves.csv". */
-export function curvesFileName(title: string): string {
+/** A study title as a file-name stem: "Bench load, two MOSFETs" → "bench-load-two-mosfets". */
+export function titleSlug(title: string): string {
   const slug = title
     .toLowerCase()
     .normalize('NFKD')
     .replace(/[^a-z0-9]+/g, '-')
     .slice(0, 60)
     .replace(/^-+|-+$/g, '');
-  return `${slug || 'study'}-curves.csv`;
+  return slug || 'study';
+}
+
+/** A file name from the study title: "bench-load-curves.csv". */
+export function curvesFileName(title: string): string {
+  return `${titleSlug(title)}-curves.csv`;
 }

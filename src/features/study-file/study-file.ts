@@ -1,3 +1,4 @@
+import { titleSlug } from '@/charts/curves-csv';
 import { STUDY_FORMAT, STUDY_VERSION } from '@/core/study';
 
 import type { Study } from '@/features/studies/types';
@@ -33,11 +34,5 @@ export function studyFileText(study: Pick<Study, 'title' | 'description' | 'docu
 
 /** A file name from the study title: "bench-load-two-mosfets.json". */
 export function studyFileName(title: string): string {
-  const slug = title
-    .toLowerCase()
-    .normalize('NFKD')
-    .replace(/[^a-z0-9]+/g, '-')
-    .slice(0, 60)
-    .replace(/^-+|-+$/g, '');
-  return `${slug || 'study'}.json`;
+  return `${titleSlug(title)}.json`;
 }
