@@ -13,6 +13,8 @@ export type PassMember = {
   currentLimit?: readonly CurvePoint[];
   /** False while the entry is in thermal shutdown: it carries no load current. */
   on: boolean;
+  /** Current of each part as a fraction of the equal share (part-to-part mismatch); default 1. */
+  share?: number;
 };
 
 export type Drive = { vinV: number; voutV: number; iloadA: number };
@@ -43,7 +45,8 @@ const REL_TOL = 1e-12;
  * the output sags to Vin − Vdropout(I/n) when the input lacks headroom, and the current is
  * clamped to n·Ilim(Vin − Vout). Both depend on each other, so the pair is iterated to a
  * fixed point. The output voltage is held where the regulator puts it; a resistive load,
- * which would pull it lower in current limit, is not modelled.
+ * which would pull it lower in current limit, is not modelled. A member's `share` scales the
+ * current of its parts (a share error, PHYSICS.md §1); dropout and limit are taken at that current.
  */
 export function solveOperatingPoint(drive: Drive, members: readonly PassMember[]): OperatingPoint {
   const { vinV, iloadA } = drive;
@@ -69,10 +72,10 @@ export function solveOperatingPoint(drive: Drive, members: readonly PassMember[]
   for (let k = 0; k < MAX_ITERATIONS; k++) {
     const part = current / n;
     dropoutV = 0;
-    for (const m of conducting) if (m.dropout) dropoutV = Math.max(dropoutV, interpolateLinear(m.dropout, part));
+    for (const m of conducting) if (m.dropout) dropoutV = Math.max(dropoutV, interpolateLinear(m.dropout, part * (m.share ?? 1)));
     vout = Math.min(drive.voutV, Math.max(0, vinV - dropoutV));
     let partLimit = Infinity;
-    for (const m of conducting) if (m.currentLimit) partLimit = Math.min(partLimit, interpolateLinear(m.currentLimit, vinV - vout));
+    for (const m of conducting) if (m.currentLimit) partLimit = Math.min(partLimit, interpolateLinear(m.currentLimit, vinV - vout) / (m.share ?? 1));
     limitA = partLimit * n;
     const next = Math.min(iloadA, limitA);
     if (Math.abs(next - current) <= REL_TOL * Math.max(1, iloadA)) {
@@ -86,7 +89,7 @@ export function solveOperatingPoint(drive: Drive, members: readonly PassMember[]
     voutV: vout,
     currentA: current,
     partCurrentA: part,
-    partPowerW: members.map((m) => passDissipationW(vinV, vout, m.on ? part : 0, m.iqA)),
+    partPowerW: members.map((m) => passDissipationW(vinV, vout, m.on ? part * (m.share ?? 1) : 0, m.iqA)),
     dropoutV,
     inDropout: vout < drive.voutV,
     currentLimited: current < iloadA,

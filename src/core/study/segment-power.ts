@@ -21,6 +21,7 @@ const member = (device: Device, on: boolean): PassMember => ({
   dropout: device.electrical?.dropout,
   currentLimit: device.electrical?.currentLimit,
   on,
+  share: device.currentShare,
 });
 
 export type SegmentPower = {

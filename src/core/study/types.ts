@@ -55,6 +55,11 @@ export type Device = {
   partId?: number;
   /** Safe operating area of one part, checked at every operating point of the solved profile. */
   soa?: SoaModel;
+  /**
+   * Not a document field: current of each part as a fraction of the equal share when fed by
+   * an electrical segment (default 1). Set by the tolerance sweep for part-to-part share error.
+   */
+  currentShare?: number;
 };
 
 export type NaturalConvection = { referenceRiseK: number; exponent: number };
