@@ -34,7 +34,9 @@ export const PROFILE_CACHE_SIZE = 64;
 export const BOUND_CLUSTER_REL = 0.01;
 
 /**
- * When (λ_k − λ_(k−1)) h is at most this, runProfile derives e^(−λ_k h) from its neighbour's
- * by a four-term Taylor factor; the first neglected term, δ⁴/24, is below 1e−21.
+ * e^(−δ) for 0 ≤ δ ≤ SMALL_EXP_ARG comes from a Taylor polynomial of degree 9 instead of
+ * Math.exp: runProfile uses it for slow modes (δ = λ_k h) and for a mode whose rate is
+ * close to the previous one (δ = (λ_k − λ_(k−1)) h, then times that mode's factor). The
+ * first neglected term, δ^10/10!, is below 2.6e−19 relative (Taylor remainder bound).
  */
-export const NEAR_RATE_STEP = 1e-5;
+export const SMALL_EXP_ARG = 0.0625;

@@ -1,5 +1,6 @@
-import { NEAR_RATE_STEP, PEAK_SEARCH_ABS_TOL, PROFILE_CACHE_SIZE } from './constants';
+import { PEAK_SEARCH_ABS_TOL, PROFILE_CACHE_SIZE, SMALL_EXP_ARG } from './constants';
 import type { ExpSumWorkspace } from './exp-sum-roots';
+import { expSmall } from './exp-small';
 import { interiorPeak } from './interior-peak';
 import { clusterGaps, type ModeClusters } from './mode-clusters';
 
@@ -28,7 +29,7 @@ export function runSegments(
   // Module bindings read through getters once compiled to CommonJS: keep locals.
   const C = PROFILE_CACHE_SIZE;
   const tol = PEAK_SEARCH_ABS_TOL;
-  const nearStep = NEAR_RATE_STEP;
+  const small = SMALL_EXP_ARG;
   const cacheU = new Float64Array(C * q).fill(NaN);
   const cacheXInf = new Float64Array(C * n);
   const cacheA0 = new Float64Array(C * nw);
@@ -67,14 +68,15 @@ export function runSegments(
         if (cacheH[slotH] !== h) {
           cacheH[slotH] = h;
           const slot = slotH * n;
+          let previous = 1;
           for (let k = 0; k < n; k++) {
-            // A near-equal rate (a symmetric pair of devices) reuses its neighbour's exp:
-            // e^(−δ) by four Taylor terms is exact to rounding for δ ≤ NEAR_RATE_STEP.
-            const delta = k > 0 ? (rates[k] - rates[k - 1]) * h : Infinity;
-            cacheDecay[slot + k] =
-              delta <= nearStep
-                ? cacheDecay[slot + k - 1] * (1 - delta * (1 - delta * (0.5 - delta / 6)))
-                : Math.exp(-rates[k] * h);
+            // Slow modes and a rate close to the one before (a symmetric pair of devices)
+            // take a Taylor polynomial instead of Math.exp: about half the exps here.
+            const own = rates[k] * h;
+            const step = k > 0 ? (rates[k] - rates[k - 1]) * h : own;
+            const e = own <= small ? expSmall(own) : step <= small ? previous * expSmall(step) : Math.exp(-own);
+            cacheDecay[slot + k] = e;
+            previous = e;
           }
           gapReady[slotH] = 0;
         }
@@ -197,7 +199,7 @@ function sameRow(a: Float64Array, ia: number, b: Float64Array, ib: number, q: nu
   return true;
 }
 
-/** Caches u, x∞ = F u (column by column, zero inputs skipped) and a_0 = (W F + D)_j u. */
+/** Caches u, x∞ = F u and a_0 = (W F + D)_j u. */
 function fillInputSlot(
   slot: number,
   inputs: Float64Array,
@@ -213,12 +215,10 @@ function fillInputSlot(
 ): void {
   const xb = slot * n;
   for (let j = 0; j < q; j++) cacheU[slot * q + j] = inputs[row + j];
-  const u0 = inputs[row];
-  for (let k = 0; k < n; k++) cacheXInf[xb + k] = columns[k] * u0;
-  for (let j = 1; j < q; j++) {
-    const uj = inputs[row + j];
-    if (uj === 0) continue;
-    for (let k = 0; k < n; k++) cacheXInf[xb + k] += columns[j * n + k] * uj;
+  for (let k = 0; k < n; k++) {
+    let v = 0;
+    for (let j = 0; j < q; j++) v += columns[j * n + k] * inputs[row + j];
+    cacheXInf[xb + k] = v;
   }
   for (let w = 0; w < nw; w++) {
     let v = 0;
