@@ -3,6 +3,7 @@ import fs from 'node:fs';
 import path from 'node:path';
 import { evaluateStudy, parseStudy } from '../core/study';
 import { benchHeatsinkRanking } from './bench-heatsink';
+import { benchLiveEdit } from './bench-live';
 import { benchNetwork, benchProfile } from './bench-network';
 
 /** Segments of the timed modal run, solved in chunks so memory stays flat. */
@@ -102,6 +103,7 @@ function main(argv: string[]): void {
 
   const heatsinkRanking = benchHeatsinkRanking();
   const demoStudies = demoStudyTimes();
+  const liveEdit = benchLiveEdit();
 
   const result = {
     segments: SEGMENTS,
@@ -128,6 +130,7 @@ function main(argv: string[]): void {
     peakRssAfter1MSegmentsMB: rssAfter1M,
     heatsinkRanking,
     demoStudies,
+    liveEdit,
     targets: { segmentsPerSecond: 5e6, speedupVsTrapezoidal: 50, heatsinkRankingSeconds: heatsinkRanking.targetSeconds },
   };
   if (json) {
@@ -149,6 +152,8 @@ function main(argv: string[]): void {
   for (const c of heatsinkRanking.cases) lines.push(`  ${c.label}: ${f(c.cpuSeconds)} s CPU (${f(c.wallSeconds)} s wall), ${c.passing} pass`);
   lines.push('Demo studies, full evaluation as the app runs it (best of 5):');
   for (const d of demoStudies) lines.push(`  ${d.file}: ${f(d.milliseconds)} ms, ${d.stretches} stretches, ${d.method}`);
+  lines.push(`Live edit: lab supply with a ${liveEdit.segments.toLocaleString('en')}-segment profile, rail plan and SOA (best of 5; the editor's budget is about 100 ms)`);
+  lines.push(`  parse ${f(liveEdit.parseMs)} ms; verdict solve ${f(liveEdit.withSoaMs)} ms (${f(liveEdit.withoutSoaMs)} ms without SOA); with chart series ${f(liveEdit.withSeriesMs)} ms`);
   process.stdout.write(`${lines.join('\n')}\n`);
 }
 

@@ -53,6 +53,8 @@ export function selectRailTaps(doc: StudyDocument): RailSelection {
   const passMembers = doc.devices.filter((d) => (d.electrical?.role ?? 'pass') === 'pass').map(member);
   const byId = new Map(doc.devices.map((d) => [d.id, d]));
   const points = new Map<ProfileSegment, TapPoint[]>();
+  /** Points by what they depend on (Vout, Iload, fed devices, tap): profiles repeat their steps. */
+  const byValue = new Map<string, TapPoint>();
   const resolvedCache = new Map<ProfileSegment, ProfileSegment[]>();
   const warnings: string[] = [];
 
@@ -62,6 +64,9 @@ export function selectRailTaps(doc: StudyDocument): RailSelection {
     const cached = list[tap];
     if (cached) return cached;
     const drive = segment.railDrive!;
+    const key = `${drive.voutV}|${drive.iloadA}|${tap}|${drive.devices ? drive.devices.join(',') : ''}`;
+    const known = byValue.get(key);
+    if (known) return (list[tap] = known);
     const members = drive.devices ? drive.devices.map((id) => member(byId.get(id)!)) : passMembers;
     const solve = (vin: number) => solveOperatingPoint({ vinV: vin, voutV: drive.voutV, iloadA: drive.iloadA }, members);
     // The tap's load is the load current; Iq (milliamperes) is left out, as in the map.
@@ -75,6 +80,7 @@ export function selectRailTaps(doc: StudyDocument): RailSelection {
     }
     const point = { vinV: vin, op, sensedV: plan.sensed === 'output' ? op.voutV : drive.voutV };
     list[tap] = point;
+    byValue.set(key, point);
     return point;
   }
 
