@@ -26,7 +26,7 @@ export type AppLocals = { db: Db; stop: () => void; close: () => Promise<void> }
  * Builds the Express app: JSON API under /api and, when it has been exported, the web app.
  * Opens no connection by itself; the database is touched on the first request.
  */
-export function createApp(config: Config, db: Db = createDb(config.databaseUrl)) {
+export function createApp(config: Config, db: Db = createDb(config.databaseUrl, { poolMax: config.databasePoolMax })) {
   const app = express();
   app.disable('x-powered-by');
   app.set('trust proxy', config.trustProxy);

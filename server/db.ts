@@ -3,7 +3,13 @@ import path from 'node:path';
 import { Sequelize, Transaction } from 'sequelize';
 import { initModels, type Models } from './models';
 
-export type Db = { sequelize: Sequelize; models: Models };
+export type Dialect = 'sqlite' | 'postgres';
+export type Db = { sequelize: Sequelize; models: Models; dialect: Dialect };
+
+/** `postgres://` or `postgresql://` selects PostgreSQL; `sqlite:` (the default) SQLite. */
+export function dialectOf(databaseUrl: string): Dialect {
+  return /^postgres(ql)?:\/\//.test(databaseUrl) ? 'postgres' : 'sqlite';
+}
 
 /** Resolves `sqlite:relative/or/absolute.sqlite` (or `sqlite::memory:`) to a storage path. */
 export function sqliteStorage(databaseUrl: string): string {
@@ -39,23 +45,63 @@ function configureSqliteConnections(sequelize: Sequelize) {
   };
 }
 
+type TransactionFn = (...args: unknown[]) => Promise<unknown>;
+const transactionOf = (sequelize: Sequelize) => sequelize as unknown as { transaction: TransactionFn };
+
 /**
- * One write transaction at a time in this process. node-sqlite3 runs statements on libuv's
- * small thread pool; transactions waiting on SQLite's write lock would otherwise occupy every
- * thread while the one holding the lock waits for a thread to commit.
+ * SQLite: one write transaction at a time in this process. node-sqlite3 runs statements on
+ * libuv's small thread pool; transactions waiting on SQLite's write lock would otherwise occupy
+ * every thread while the one holding the lock waits for a thread to commit.
  */
 function serialiseTransactions(sequelize: Sequelize) {
   let tail: Promise<unknown> = Promise.resolve();
-  const begin = sequelize.transaction.bind(sequelize) as (...args: unknown[]) => Promise<unknown>;
-  (sequelize as unknown as { transaction: (...args: unknown[]) => Promise<unknown> }).transaction = (...args: unknown[]) => {
+  const begin = sequelize.transaction.bind(sequelize) as TransactionFn;
+  transactionOf(sequelize).transaction = (...args: unknown[]) => {
     const run = tail.then(() => begin(...args));
     tail = run.catch(() => undefined);
     return run;
   };
 }
 
-/** Creates the Sequelize instance and models. Opens no connection until first used. */
-export function createDb(databaseUrl: string): Db {
+/** SQLSTATEs after which PostgreSQL asks the client to run the whole transaction again. */
+const RETRYABLE_SQLSTATES = new Set(['40001', '40P01']); // serialization_failure, deadlock_detected
+export const TRANSACTION_ATTEMPTS = 5;
+
+export function isRetryableTransactionError(err: unknown): boolean {
+  const e = err as { parent?: { code?: string }; original?: { code?: string }; code?: string } | undefined;
+  const code = e?.parent?.code ?? e?.original?.code ?? e?.code;
+  return typeof code === 'string' && RETRYABLE_SQLSTATES.has(code);
+}
+
+/**
+ * PostgreSQL: a managed transaction (`transaction(callback)`) that fails on a serialization
+ * failure or a deadlock is rolled back and run again, a few times with a short random wait.
+ * Callbacks therefore only touch the database and their own local variables; mail and other
+ * effects happen after the transaction. Writes from every process rely on row locks and
+ * compare-and-set updates (`WHERE version = …`), not on running one at a time.
+ */
+function retryTransactions(sequelize: Sequelize) {
+  const begin = sequelize.transaction.bind(sequelize) as TransactionFn;
+  transactionOf(sequelize).transaction = async (...args: unknown[]) => {
+    const managed = args.some((a) => typeof a === 'function');
+    if (!managed) return begin(...args);
+    for (let attempt = 1; ; attempt++) {
+      try {
+        return await begin(...args);
+      } catch (err) {
+        if (attempt >= TRANSACTION_ATTEMPTS || !isRetryableTransactionError(err)) throw err;
+        await new Promise((resolve) => setTimeout(resolve, 5 * 2 ** attempt * Math.random()));
+      }
+    }
+  };
+}
+
+export type DbOptions = {
+  /** PostgreSQL connections per process (SQLite always uses one per transaction). */
+  poolMax?: number;
+};
+
+function createSqlite(databaseUrl: string): Sequelize {
   const storage = sqliteStorage(databaseUrl);
   if (storage !== ':memory:') fs.mkdirSync(path.dirname(storage), { recursive: true });
   const sequelize = new Sequelize({
@@ -70,5 +116,51 @@ export function createDb(databaseUrl: string): Db {
   });
   configureSqliteConnections(sequelize);
   serialiseTransactions(sequelize);
-  return { sequelize, models: initModels(sequelize) };
+  return sequelize;
 }
+
+function createPostgres(databaseUrl: string, options: DbOptions): Sequelize {
+  const sequelize = new Sequelize(databaseUrl, {
+    dialect: 'postgres',
+    logging: false,
+    pool: { max: options.poolMax ?? 10, min: 0, idle: 10_000, acquire: 30_000 },
+    // A statement inside a transaction cannot be retried alone (the transaction is aborted);
+    // retryTransactions runs the whole transaction again instead.
+    retry: { max: 1 },
+    // Said explicitly so a server-wide default_transaction_isolation does not change it: a
+    // compare-and-set UPDATE that waited for another writer's row lock re-reads the row and
+    // matches nothing, which the services turn into a conflict answer.
+    isolationLevel: Transaction.ISOLATION_LEVELS.READ_COMMITTED,
+  });
+  retryTransactions(sequelize);
+  return sequelize;
+}
+
+/** Creates the Sequelize instance and models. Opens no connection until first used. */
+export function createDb(databaseUrl: string, options: DbOptions = {}): Db {
+  const dialect = dialectOf(databaseUrl);
+  const sequelize = dialect === 'postgres' ? createPostgres(databaseUrl, options) : createSqlite(databaseUrl);
+  return { sequelize, models: initModels(sequelize), dialect };
+}
+
+/**
+ * Runs `fn` (migrations, the first seed) while no other server process on the same database
+ * does: on PostgreSQL under a transaction-scoped advisory lock held on a connection of its own
+ * while `fn` uses others. SQLite deployments are one process, so `fn` just runs.
+ */
+export async function withStartupLock<T>(db: Db, fn: () => Promise<T>): Promise<T> {
+  if (db.dialect !== 'postgres') return fn();
+  const t = await db.sequelize.transaction();
+  try {
+    await db.sequelize.query('SELECT pg_advisory_xact_lock(:key)', { replacements: { key: STARTUP_LOCK_KEY }, transaction: t });
+    const result = await fn();
+    await t.commit();
+    return result;
+  } catch (err) {
+    await t.rollback().catch(() => undefined);
+    throw err;
+  }
+}
+
+/** Any fixed 64-bit number; it names the lock in pg_locks. */
+const STARTUP_LOCK_KEY = 7_405_221_903;

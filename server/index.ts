@@ -1,7 +1,7 @@
 import type { Server } from 'node:http';
 import { createApp, type AppLocals } from './app';
 import { ConfigError, loadConfig } from './config';
-import { createDb } from './db';
+import { createDb, withStartupLock } from './db';
 import { migrateUp } from './migrate';
 import { DEMO_ACCOUNTS, DEMO_PASSWORD, seedDemo } from './seed/demo';
 
@@ -17,11 +17,15 @@ export async function main(): Promise<Server> {
     }
     throw err;
   }
-  const db = createDb(config.databaseUrl);
+  const db = createDb(config.databaseUrl, { poolMax: config.databasePoolMax });
   await db.sequelize.authenticate();
-  const applied = await migrateUp(db.sequelize);
-  if (applied.length > 0) console.log(`Applied migrations: ${applied.join(', ')}`);
-  if (config.seedDemo && (await seedDemo(db, config.bcryptCost))) console.log('Seeded the demo team, accounts and studies.');
+  // Several processes may start at once on one PostgreSQL database: one migrates and seeds,
+  // the others wait for it and then find nothing left to do.
+  await withStartupLock(db, async () => {
+    const applied = await migrateUp(db.sequelize);
+    if (applied.length > 0) console.log(`Applied migrations: ${applied.join(', ')}`);
+    if (config.seedDemo && (await seedDemo(db, config.bcryptCost))) console.log('Seeded the demo team, accounts and studies.');
+  });
 
   const app = createApp(config, db);
   const server = await new Promise<Server>((resolve) => {

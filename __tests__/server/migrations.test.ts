@@ -1,18 +1,22 @@
-import fs from 'node:fs';
-import os from 'node:os';
-import path from 'node:path';
+import type { Model, ModelStatic } from 'sequelize';
 import { createDb } from '../../server/db';
 import { createMigrator, migrateUp } from '../../server/migrate';
+import { createTestDatabase, TEST_DIALECT, type TestDatabase } from './test-app';
 
 describe('migrations', () => {
-  const dir = fs.mkdtempSync(path.join(os.tmpdir(), 'junctura-migrate-'));
-  const db = createDb(`sqlite:${path.join(dir, 'm.sqlite')}`);
+  let database: TestDatabase;
+  let db: ReturnType<typeof createDb>;
+  beforeAll(async () => {
+    database = await createTestDatabase();
+    db = createDb(database.url);
+  });
   afterAll(async () => {
     await db.sequelize.close();
-    fs.rmSync(dir, { recursive: true, force: true });
+    await database.drop();
   });
 
   it('create every table, apply once only, and roll back cleanly', async () => {
+    expect(db.dialect).toBe(TEST_DIALECT);
     expect(await migrateUp(db.sequelize)).toEqual(['0001-initial', '0002-team-work', '0003-catalogues', '0004-parts']);
     expect(await migrateUp(db.sequelize)).toEqual([]);
     const tables = (await db.sequelize.getQueryInterface().showAllTables()).sort();
@@ -28,10 +32,48 @@ describe('migrations', () => {
     expect(await migrateUp(db.sequelize)).toEqual(['0001-initial', '0002-team-work', '0003-catalogues', '0004-parts']);
   });
 
-  it('runs SQLite in WAL mode with a busy timeout', async () => {
+  // Column types as each dialect's describeTable names them, by Sequelize data type.
+  const columnTypes: Record<string, Record<typeof TEST_DIALECT, RegExp>> = {
+    INTEGER: { sqlite: /^INTEGER$/, postgres: /^INTEGER$/ },
+    STRING: { sqlite: /^VARCHAR\(\d+\)$/, postgres: /^CHARACTER VARYING\(\d+\)$/ },
+    TEXT: { sqlite: /^TEXT$/, postgres: /^TEXT$/ },
+    JSON: { sqlite: /^JSON$/, postgres: /^JSON$/ },
+    BOOLEAN: { sqlite: /^TINYINT\(1\)$/, postgres: /^BOOLEAN$/ },
+    'DOUBLE PRECISION': { sqlite: /^DOUBLE PRECISION$/, postgres: /^DOUBLE PRECISION$/ },
+    DATE: { sqlite: /^DATETIME$/, postgres: /^TIMESTAMP WITH TIME ZONE$/ },
+  };
+
+  it('give every model attribute a column of its type (and nullability, where the model says) on this dialect', async () => {
+    await migrateUp(db.sequelize);
+    const qi = db.sequelize.getQueryInterface();
+    const problems: string[] = [];
+    for (const model of Object.values(db.models) as ModelStatic<Model>[]) {
+      const table = model.getTableName() as string;
+      const columns = await qi.describeTable(table);
+      for (const attribute of Object.values(model.getAttributes())) {
+        const field = attribute.field ?? '';
+        const column = columns[field];
+        const key = (attribute.type as unknown as { key: string }).key;
+        if (!column) problems.push(`${table}.${field} is missing`);
+        else if (!columnTypes[key]?.[TEST_DIALECT].test(column.type)) problems.push(`${table}.${field} is ${column.type}, not ${key}`);
+        else if (!attribute.primaryKey && attribute.allowNull !== undefined && column.allowNull !== attribute.allowNull) problems.push(`${table}.${field} allowNull is ${column.allowNull}`);
+      }
+    }
+    expect(problems).toEqual([]);
+  });
+
+  (TEST_DIALECT === 'sqlite' ? it : it.skip)('runs SQLite in WAL mode with a busy timeout', async () => {
     const [mode] = (await db.sequelize.query('PRAGMA journal_mode', { plain: false, raw: true }))[0] as { journal_mode: string }[];
     expect(mode.journal_mode).toBe('wal');
     const [busy] = (await db.sequelize.query('PRAGMA busy_timeout', { raw: true }))[0] as Record<string, number>[];
     expect(Object.values(busy)[0]).toBe(5000);
+  });
+
+  (TEST_DIALECT === 'postgres' ? it : it.skip)('runs PostgreSQL transactions at READ COMMITTED, the level the compare-and-set saves are written for', async () => {
+    const level = await db.sequelize.transaction(async (transaction) => {
+      const row = (await db.sequelize.query('SHOW transaction_isolation', { plain: true, transaction })) as { transaction_isolation: string };
+      return row.transaction_isolation;
+    });
+    expect(level).toBe('read committed');
   });
 });

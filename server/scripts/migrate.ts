@@ -1,10 +1,11 @@
 import { loadConfig } from '../config';
-import { createDb } from '../db';
+import { createDb, withStartupLock } from '../db';
 import { migrateUp } from '../migrate';
 
 async function run() {
-  const db = createDb(loadConfig().databaseUrl);
-  const applied = await migrateUp(db.sequelize);
+  const config = loadConfig();
+  const db = createDb(config.databaseUrl, { poolMax: config.databasePoolMax });
+  const applied = await withStartupLock(db, () => migrateUp(db.sequelize));
   console.log(applied.length ? `Applied: ${applied.join(', ')}` : 'Database is up to date.');
   await db.sequelize.close();
 }

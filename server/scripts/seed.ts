@@ -1,13 +1,16 @@
 import { loadConfig } from '../config';
-import { createDb } from '../db';
+import { createDb, withStartupLock } from '../db';
 import { migrateUp } from '../migrate';
 import { seedDemo } from '../seed/demo';
 
 async function run() {
   const config = loadConfig();
-  const db = createDb(config.databaseUrl);
-  await migrateUp(db.sequelize);
-  console.log((await seedDemo(db, config.bcryptCost)) ? 'Seeded the demo data.' : 'Users exist already: nothing seeded.');
+  const db = createDb(config.databaseUrl, { poolMax: config.databasePoolMax });
+  const seeded = await withStartupLock(db, async () => {
+    await migrateUp(db.sequelize);
+    return seedDemo(db, config.bcryptCost);
+  });
+  console.log(seeded ? 'Seeded the demo data.' : 'Users exist already: nothing seeded.');
   await db.sequelize.close();
 }
 

@@ -92,7 +92,7 @@ export async function describeInvitation(deps: Deps, token: string) {
 export async function acceptInvitation(deps: Deps, token: string, input: AcceptInvitationInput, signedInUserId?: number): Promise<number> {
   const { db, config } = deps;
   const i = await usableInvitation(deps, token);
-  let user = await db.models.User.findOne({ where: { email: i.email } });
+  const user = await db.models.User.findOne({ where: { email: i.email } });
   if (user) {
     const provedBySession = signedInUserId === user.id;
     const provedByPassword = !!input.password && (await verifyPassword(input.password, user.passwordHash));
@@ -112,11 +112,12 @@ export async function acceptInvitation(deps: Deps, token: string, input: AcceptI
     // Claim the link first so two simultaneous accepts cannot both succeed.
     const [claimed] = await db.models.Invitation.update({ acceptedAt: new Date() }, { where: { id: i.id, acceptedAt: null }, transaction });
     if (claimed === 0) throw new AppError(410, 'invitation_gone', 'This invitation link has already been used');
-    user ??= await db.models.User.create({ email: i.email, name: input.name!, passwordHash: passwordHash! }, { transaction });
-    const already = await db.models.Membership.findOne({ where: { teamId: i.teamId, userId: user.id }, transaction });
-    if (!already) await db.models.Membership.create({ teamId: i.teamId, userId: user.id, role: i.role }, { transaction });
-    await recordEvent(db, { teamId: i.teamId, actorId: user.id, action: 'invitation.accepted', subjectType: 'invitation', subjectId: i.id, details: { email: i.email, role: i.role } }, transaction);
-    return user.id;
+    // A local, not `user`: on PostgreSQL a transaction may run again after a deadlock.
+    const member = user ?? (await db.models.User.create({ email: i.email, name: input.name!, passwordHash: passwordHash! }, { transaction }));
+    const already = await db.models.Membership.findOne({ where: { teamId: i.teamId, userId: member.id }, transaction });
+    if (!already) await db.models.Membership.create({ teamId: i.teamId, userId: member.id, role: i.role }, { transaction });
+    await recordEvent(db, { teamId: i.teamId, actorId: member.id, action: 'invitation.accepted', subjectType: 'invitation', subjectId: i.id, details: { email: i.email, role: i.role } }, transaction);
+    return member.id;
   });
   return userId;
 }

@@ -1,3 +1,4 @@
+import { Op } from 'sequelize';
 import type { Deps } from '../deps';
 import { AppError } from '../errors';
 import { passwordResetMail } from '../mail/templates';
@@ -28,8 +29,12 @@ export async function resetPassword(deps: Deps, token: string, password: string,
     const [claimed] = await db.models.PasswordReset.update({ usedAt: now }, { where: { id: reset.id, usedAt: null }, transaction });
     if (claimed === 0) throw new AppError(410, 'reset_gone', 'This reset link has already been used');
     await db.models.User.update({ passwordHash }, { where: { id: reset.userId }, transaction });
-    // Sessions are JSON text; the user id is stored as "userId":<n> in it.
-    await db.sequelize.query('DELETE FROM Sessions WHERE data LIKE ?', { replacements: [`%"userId":${reset.userId}}%`], transaction });
-    await db.sequelize.query('DELETE FROM Sessions WHERE data LIKE ?', { replacements: [`%"userId":${reset.userId},%`], transaction });
+    // Sessions are JSON text; the user id is stored as "userId":<n> in it. The query interface
+    // quotes the mixed-case table name (PostgreSQL folds unquoted names to lower case), and
+    // LIKE compares case-sensitively on PostgreSQL, which is what this exact key needs.
+    const userId = reset.userId;
+    await db.sequelize
+      .getQueryInterface()
+      .bulkDelete('Sessions', { data: { [Op.or]: [{ [Op.like]: `%"userId":${userId}}%` }, { [Op.like]: `%"userId":${userId},%` }] } }, { transaction });
   });
 }
