@@ -1,6 +1,7 @@
 import { Router, type NextFunction, type Request, type Response } from 'express';
 import * as yup from 'yup';
 import { commentSchema, reviewSchema, studyCreateSchema, studySaveSchema } from '../../src/validation/studies';
+import { toleranceSchema } from '../../src/validation/tolerance';
 import type { Deps } from '../deps';
 import { AppError } from '../errors';
 import { authOf, requireAuth } from '../middleware/auth';
@@ -10,6 +11,7 @@ import { listReviews, reviewStudy, submitForReview } from '../services/review-se
 import { listRevisions, restoreRevision, revisionView } from '../services/revisions-service';
 import { rankStudy } from '../services/ranking-service';
 import { solveDocument } from '../services/study-document';
+import { sweepStudy } from '../services/tolerance-service';
 import { createStudy, deleteStudy, duplicateStudy, findStudy, listStudies, saveStudy, studyView } from '../services/studies-service';
 import { validateBody } from '../validate';
 import { idParam } from './params';
@@ -69,6 +71,11 @@ export function studiesRouter(deps: Deps) {
       return v;
     };
     res.json(await rankStudy(db, studyOf(res), { sinkId: q.sink, sortBy: q.sort, airSpeedMPerS: num('airSpeed'), ambientC: num('ambientC'), marginK: num('marginK') }));
+  });
+
+  // Any member may sweep: it reads the study and writes nothing.
+  router.post('/:id/tolerance', load, async (req, res) => {
+    res.json(await sweepStudy(studyOf(res), validateBody(toleranceSchema, req.body)));
   });
 
   // Review

@@ -3,3 +3,4 @@ export * from './studies';
 export * from './team';
 export * from './catalogues';
 export * from './parts';
+export * from './tolerance';

@@ -1,5 +1,5 @@
 import { evaluateStudy, type StudyDocument } from '../study';
-import { MAX_CORNER_INPUTS, MAX_RUNS, MAX_TOTAL_SEGMENTS } from './constants';
+import { MAX_AMBIENT_SHIFT_K, MAX_CORNER_INPUTS, MAX_RUNS, MAX_SPREAD_PCT, MAX_TOTAL_SEGMENTS } from './constants';
 import { activeInputs, centre, shareGroup } from './inputs';
 import { deviationsOf, perturbStudy } from './perturb';
 import { mulberry32, runSeed, standardNormal } from './random';
@@ -17,12 +17,30 @@ export type TolerancePlan = {
   segmentsPerRun: number;
 };
 
+const SPREADS = ['rthJcPct', 'rthSaPct', 'interfacePct', 'linePct', 'loadPct', 'sharePct'] as const;
+
+function checkSpec(spec: ToleranceSpec): void {
+  if (spec.mode !== 'corners' && spec.mode !== 'monte-carlo') throw new RangeError(`mode: must be "corners" or "monte-carlo", got ${JSON.stringify(spec.mode)}`);
+  for (const key of SPREADS) {
+    const v = spec[key];
+    if (!(v >= 0 && v <= MAX_SPREAD_PCT)) throw new RangeError(`${key}: must be from 0 to ${MAX_SPREAD_PCT} %, got ${v}`);
+  }
+  for (const key of ['ambientLowK', 'ambientHighK'] as const) {
+    if (!(Math.abs(spec[key]) <= MAX_AMBIENT_SHIFT_K)) throw new RangeError(`${key}: must be within ±${MAX_AMBIENT_SHIFT_K} K, got ${spec[key]}`);
+  }
+  if (spec.ambientHighK < spec.ambientLowK) throw new RangeError(`ambientHighK: must not be below ambientLowK (${spec.ambientLowK} K), got ${spec.ambientHighK}`);
+  if (spec.mode === 'monte-carlo' && !(Number.isInteger(spec.seed) && spec.seed >= 0 && spec.seed <= 0xffffffff)) {
+    throw new RangeError(`seed: must be a whole number from 0 to 4294967295, got ${spec.seed}`);
+  }
+}
+
 /**
  * Checks a spec against a study and sets the sweep up. Throws a RangeError naming the field:
  * corners over more than MAX_CORNER_INPUTS inputs, more than MAX_RUNS runs, or more than
  * MAX_TOTAL_SEGMENTS segments solved in all.
  */
 export function planTolerance(doc: StudyDocument, spec: ToleranceSpec): TolerancePlan {
+  checkSpec(spec);
   const { inputs, skipped } = activeInputs(doc, spec);
   let runs: number;
   if (spec.mode === 'corners') {
