@@ -18,8 +18,15 @@ export async function submitForReview(deps: Deps, auth: SessionView, study: Stud
   if (study.status !== 'draft' && study.status !== 'changes_requested') {
     throw new AppError(409, 'invalid_status', `Only a draft can be submitted; this study is ${study.status.replace('_', ' ')}`);
   }
+  const changedMeanwhile = () => new AppError(409, 'version_conflict', 'Someone changed this study meanwhile: reload it and try again');
   await db.sequelize.transaction(async (transaction) => {
-    await study.update({ status: 'in_review' }, { transaction });
+    // Compare-and-set on the version and status read above, so a save or a review that
+    // committed meanwhile (in any server process) is not overwritten.
+    const [count] = await db.models.Study.update(
+      { status: 'in_review' },
+      { where: { id: study.id, version: study.version, status: { [Op.in]: ['draft', 'changes_requested'] } }, transaction },
+    );
+    if (count === 0) throw changedMeanwhile();
     await recordEvent(db, { teamId: study.teamId, actorId: auth.user.id, action: 'study.submitted', subjectType: 'study', subjectId: study.id, details: { title: study.title, revision: study.version } }, transaction);
   });
   const reviewers = await db.models.Membership.findAll({
@@ -48,11 +55,14 @@ export async function reviewStudy(deps: Deps, auth: SessionView, study: Study, i
   if (revision?.authorId === auth.user.id) throw AppError.forbidden('You cannot review a revision you wrote');
 
   await db.sequelize.transaction(async (transaction) => {
+    // Only the revision that was read, and only while it is still in review: a save that
+    // committed meanwhile made a new draft this decision is not about.
+    const [count] = await db.models.Study.update({ status: input.decision }, { where: { id: study.id, version: study.version, status: 'in_review' }, transaction });
+    if (count === 0) throw new AppError(409, 'version_conflict', 'The study changed while you reviewed it: reload it to see the current revision');
     await db.models.Review.create(
       { studyId: study.id, reviewerId: auth.user.id, revisionNumber: study.version, decision: input.decision, comment: input.comment ?? '' },
       { transaction },
     );
-    await study.update({ status: input.decision }, { transaction });
     await recordEvent(
       db,
       { teamId: study.teamId, actorId: auth.user.id, action: 'study.reviewed', subjectType: 'study', subjectId: study.id, details: { title: study.title, revision: study.version, decision: input.decision } },
