@@ -14,6 +14,7 @@ import { ResultsCaution } from './components/results-caution';
 import { SinkTable } from './components/sink-table';
 import { SoaPanel } from './components/soa-panel';
 import { TwoColumns } from './components/two-columns';
+import { UpdatingNote } from './components/updating-note';
 import { VerdictPanel } from './components/verdict-panel';
 import { curvesCsv, curvesFileName } from '@/charts/curves-csv';
 import { mainsHint } from './mains-hint';
@@ -114,6 +115,7 @@ export function StudyResults({ document, onPickTime }: StudyResultsProps) {
       {state.kind === 'solving' ? <LoadingState label="Solving the study…" /> : null}
       {state.kind === 'invalid' ? <Text tone="muted">No results: the saved document could not be read (see the design inputs).</Text> : null}
       {state.kind === 'failed' ? <InlineAlert message={`The study could not be solved: ${state.message}`} /> : null}
+      {state.kind !== 'solving' && state.updating ? <UpdatingNote /> : null}
       {state.kind === 'ok' ? <Solved result={state.result} mains={mains} onPickTime={onPickTime} /> : null}
     </Card>
   );

@@ -1,67 +1,40 @@
-import { useEffect, useState } from 'react';
+import type { StudyDocument, StudyResult } from '@/core/study';
 
-import { evaluateStudy, INTERACTIVE_MAX_STRETCHES, parseStudy, type StudyDocument, type StudyResult } from '@/core/study';
+import type { SolveOutcome } from './solve-outcome';
+import { useSolve } from './use-solve';
 
 export type StudyResultState =
   | { kind: 'empty' }
   | { kind: 'solving' }
-  | { kind: 'invalid'; message: string }
-  | { kind: 'failed'; message: string }
-  | { kind: 'ok'; document: StudyDocument; result: StudyResult };
+  | { kind: 'invalid'; message: string; updating?: boolean }
+  | { kind: 'failed'; message: string; updating?: boolean }
+  | { kind: 'ok'; document: StudyDocument; result: StudyResult; updating?: boolean };
 
-type Outcome = Exclude<StudyResultState, { kind: 'empty' } | { kind: 'solving' }>;
-
-// Keyed by the saved document object: the query cache hands back the same object until it changes.
-const solved = new WeakMap<object, Outcome>();
+// Keyed by the document object: the query cache hands back the same object until it changes.
+const solved = new WeakMap<object, SolveOutcome>();
+const known = (raw: object) => solved.get(raw);
+const remember = (raw: object, outcome: SolveOutcome) => void solved.set(raw, outcome);
 
 function isEmpty(raw: unknown): raw is null | undefined {
   if (raw === null || raw === undefined) return true;
   return typeof raw === 'object' && !Array.isArray(raw) && Object.keys(raw).length === 0;
 }
 
-const messageOf = (error: unknown) => (error instanceof Error ? error.message : String(error));
-
-function solve(raw: unknown): Outcome {
-  let document: StudyDocument;
-  try {
-    document = parseStudy(raw);
-  } catch (error) {
-    return { kind: 'invalid', message: messageOf(error) };
-  }
-  try {
-    return { kind: 'ok', document, result: evaluateStudy(document, { maxStretches: INTERACTIVE_MAX_STRETCHES }) };
-  } catch (error) {
-    return { kind: 'failed', message: messageOf(error) };
-  }
-}
+const NO_OPTIONS = {};
 
 /**
- * Solves a saved study document in the client with the core's own pipeline. The solve runs
- * after the first paint (a timer, not the render), so the page shows "solving" instead of
- * freezing on a long profile; each document object is solved once.
+ * Solves a study document in the client with the core's own pipeline, off the render path (a
+ * Web Worker on the web). Each document object is solved once; while a newer one is solved
+ * the last result stays on screen, marked `updating`.
  */
 export function useStudyResult(raw: unknown): StudyResultState {
-  const key = typeof raw === 'object' && raw !== null ? raw : null;
-  const [state, setState] = useState<{ key: object | null; outcome: Outcome } | null>(null);
-
-  useEffect(() => {
-    if (key === null || isEmpty(key) || solved.has(key)) return;
-    let live = true;
-    const timer = setTimeout(() => {
-      const outcome = solve(key);
-      solved.set(key, outcome);
-      if (live) setState({ key, outcome });
-    }, 0);
-    return () => {
-      live = false;
-      clearTimeout(timer);
-    };
-  }, [key]);
+  const key = typeof raw === 'object' && raw !== null && !isEmpty(raw) ? raw : null;
+  const state = useSolve(key, NO_OPTIONS, true, known, remember);
 
   if (isEmpty(raw)) return { kind: 'empty' };
   if (key === null) return { kind: 'invalid', message: 'the study document must be a JSON object' };
   const cached = solved.get(key);
   if (cached) return cached;
-  if (state?.key === key) return state.outcome;
+  if (state.outcome) return { ...state.outcome, updating: state.updating };
   return { kind: 'solving' };
 }

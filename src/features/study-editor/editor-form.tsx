@@ -96,7 +96,7 @@ export function EditorForm({ study }: EditorFormProps) {
     return map;
   }, [problems]);
 
-  const phoneVerdict = useLiveVerdict(lastGood?.document ?? null, !wide && !resultsOpen);
+  const phoneVerdict = useLiveVerdict(lastGood?.raw ?? null, !wide && !resultsOpen);
 
   // Unsaved edits are kept on the device; while a kept draft is on offer, it is not overwritten.
   useEffect(() => {

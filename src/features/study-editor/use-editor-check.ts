@@ -15,7 +15,7 @@ export type EditorCheck = {
 };
 
 /** How long typing may pause before the document is checked again, ms. */
-export const CHECK_DELAY_MS = 250;
+export const CHECK_DELAY_MS = 100;
 
 /**
  * Everything wrong with the values: each numeric field whose text does not read (with the

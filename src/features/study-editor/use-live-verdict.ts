@@ -1,30 +1,26 @@
-import { useEffect, useState } from 'react';
+import { useMemo } from 'react';
 
-import { evaluateStudy, INTERACTIVE_MAX_STRETCHES, type StudyDocument } from '@/core/study';
+import { useSolve } from '@/features/results/use-solve';
 import { studyVerdict, type Verdict } from '@/features/results/verdict';
+
+import type { RawDocument } from './types';
 
 export type LiveVerdict =
   | { kind: 'waiting' }
-  | { kind: 'ok'; verdict: Verdict; warnings: readonly string[]; document: StudyDocument }
-  | { kind: 'failed'; message: string; document: StudyDocument };
+  | { kind: 'ok'; verdict: Verdict; warnings: readonly string[]; updating: boolean }
+  | { kind: 'failed'; message: string; updating: boolean };
+
+/** The verdict needs no chart series. */
+const VERDICT_ONLY = { seriesPoints: 0 };
 
 /**
- * The verdict of the checked document, solved with the core's pipeline after the first paint
- * (a timer), the last one kept while the next is solved or while the edits have problems.
+ * The verdict of the checked document, solved off the render path (a Web Worker on the web);
+ * the last one stays while the next is solved (`updating`) or while the edits have problems.
  */
-export function useLiveVerdict(document: StudyDocument | null, enabled: boolean): LiveVerdict {
-  const [state, setState] = useState<LiveVerdict>({ kind: 'waiting' });
-  useEffect(() => {
-    if (!enabled || document === null) return;
-    const timer = setTimeout(() => {
-      try {
-        const result = evaluateStudy(document, { seriesPoints: 0, maxStretches: INTERACTIVE_MAX_STRETCHES });
-        setState({ kind: 'ok', verdict: studyVerdict(result), warnings: result.warnings, document });
-      } catch (error) {
-        setState({ kind: 'failed', message: error instanceof Error ? error.message : String(error), document });
-      }
-    }, 0);
-    return () => clearTimeout(timer);
-  }, [document, enabled]);
-  return state;
+export function useLiveVerdict(raw: RawDocument | null, enabled: boolean): LiveVerdict {
+  const { outcome, updating } = useSolve(raw, VERDICT_ONLY, enabled);
+  const verdict = useMemo(() => (outcome?.kind === 'ok' ? studyVerdict(outcome.result) : null), [outcome]);
+  if (!outcome) return { kind: 'waiting' };
+  if (outcome.kind === 'ok') return { kind: 'ok', verdict: verdict!, warnings: outcome.result.warnings, updating };
+  return { kind: 'failed', message: outcome.message, updating };
 }

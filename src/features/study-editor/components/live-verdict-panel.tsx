@@ -1,6 +1,7 @@
 import { StyleSheet, View } from 'react-native';
 
 import { InlineAlert, LoadingState, Text } from '@/components/ui';
+import { UpdatingNote } from '@/features/results/components/updating-note';
 import { VerdictPanel } from '@/features/results/components/verdict-panel';
 import { spacing } from '@/constants/theme';
 
@@ -21,6 +22,7 @@ export function LiveVerdictPanel({ state, stale }: LiveVerdictPanelProps) {
       ) : null}
       {state.kind === 'ok' ? <VerdictPanel verdict={state.verdict} warnings={state.warnings} /> : null}
       {state.kind === 'failed' ? <InlineAlert message={`The study could not be solved: ${state.message}`} /> : null}
+      {state.kind !== 'waiting' && state.updating ? <UpdatingNote /> : null}
       {stale && state.kind !== 'waiting' ? (
         <Text variant="caption" tone="muted">
           From the last inputs without problems; fix the problems above to update it.

@@ -1,0 +1,142 @@
+import type { Page } from 'playwright-core';
+
+import { liveEditDocument } from '@/cli/bench-live';
+
+import { baseUrl, signIn } from './support/app';
+import { DESKTOP, openBrowser, PHONE, type BrowserSession, type Viewport } from './support/browser';
+
+type Verdict = { passes: boolean; marginK: number | null };
+type Timing = { ms: number; longestTaskMs: number; text: string; workerMs: number | null; roundTripMs: number | null };
+
+/** Edits timed per viewport; the first one warms the page up and is left out of the median. */
+const EDITS = 5;
+/** Ambient temperatures the edits alternate between: the demo lab supply passes at 35 °C and fails at 90 °C. */
+const AMBIENTS = [90, 35];
+
+async function api<T>(page: Page, method: 'post' | 'delete', path: string, data?: unknown): Promise<T> {
+  const response = await page.request[method](`${baseUrl()}/api${path}`, { headers: { Origin: baseUrl() }, data });
+  if (!response.ok()) throw new Error(`${method.toUpperCase()} /api${path} answered ${response.status()}`);
+  return (response.status() === 204 ? undefined : await response.json()) as T;
+}
+
+/** The server's own solve of the same document: the reference the page's verdict is checked against. */
+async function serverVerdict(page: Page, document: unknown): Promise<Verdict> {
+  const { result } = await api<{ result: { meetsTarget: boolean; worst: { marginToTargetK: number } | null } }>(page, 'post', '/solve', { document });
+  return { passes: result.meetsTarget, marginK: result.worst?.marginToTargetK ?? null };
+}
+
+const fmt = (xs: (number | null)[]) => {
+  const known = xs.filter((x): x is number => x !== null);
+  return known.length ? median(known).toFixed(0) : 'n/a';
+};
+
+function median(xs: number[]): number {
+  const s = [...xs].sort((a, b) => a - b);
+  return s.length % 2 ? s[(s.length - 1) / 2] : (s[s.length / 2 - 1] + s[s.length / 2]) / 2;
+}
+
+/**
+ * Installs, in the page, a clock from the field's input event to the moment the verdict shows
+ * the expected word, and records the longest main-thread task in between (Long Tasks API).
+ */
+async function armClock(page: Page, word: string): Promise<void> {
+  await page.evaluate((expected) => {
+    const w = window as unknown as Record<string, unknown>;
+    w.__editAt = null;
+    w.__doneAt = null;
+    w.__longest = 0;
+    const tasks = new PerformanceObserver((list) => {
+      for (const e of list.getEntries()) if (w.__editAt !== null) w.__longest = Math.max(w.__longest as number, e.duration);
+    });
+    tasks.observe({ type: 'longtask', buffered: false });
+    const onInput = () => {
+      w.__editAt = performance.now();
+      document.removeEventListener('input', onInput, true);
+    };
+    document.addEventListener('input', onInput, true);
+    const check = () => {
+      const el = document.querySelector('[data-testid="study-verdict"]') as HTMLElement | null;
+      if (w.__editAt !== null && el?.innerText.trim().startsWith(expected)) {
+        w.__doneAt = performance.now();
+        observer.disconnect();
+        setTimeout(() => tasks.disconnect(), 0);
+      }
+    };
+    const observer = new MutationObserver(check);
+    observer.observe(document.body, { subtree: true, childList: true, characterData: true });
+  }, word);
+}
+
+async function timedEdit(page: Page, ambientC: number, expected: Verdict): Promise<Timing> {
+  await armClock(page, expected.passes ? 'Passes' : 'Fails');
+  await page.getByLabel('Ambient temperature (°C)').fill(String(ambientC));
+  await page.waitForFunction(() => (window as unknown as Record<string, unknown>).__doneAt !== null, null, { timeout: 90_000 });
+  return page.evaluate(() => {
+    const w = window as unknown as Record<string, number>;
+    const el = document.querySelector('[data-testid="study-verdict"]') as HTMLElement;
+    // The app's own User Timing entry of the solve that landed, when it solved in a worker.
+    const solves = performance.getEntriesByName('junctura:solve') as PerformanceMeasure[];
+    const last = solves.filter((e) => e.startTime >= w.__editAt).pop();
+    const detail = last?.detail as { solveMs?: number } | undefined;
+    return { ms: w.__doneAt - w.__editAt, longestTaskMs: w.__longest, text: el.innerText, workerMs: detail?.solveMs ?? null, roundTripMs: last ? last.duration : null };
+  });
+}
+
+// Product requirement (PRODUCT.md, Study editor: live results); the reference verdict is the server's solve (POST /api/solve).
+describe('live results of a 10,000-segment study in the browser', () => {
+  const sessions: BrowserSession[] = [];
+  let page: Page;
+  let studyId: number;
+  const document = liveEditDocument() as { ambient: { temperatureC: number } };
+  const expected = new Map<number, Verdict>();
+
+  beforeAll(async () => {
+    const session = await openBrowser(DESKTOP);
+    sessions.push(session);
+    page = session.page;
+    await signIn(page, 'designer@example.com');
+    studyId = (await api<{ study: { id: number } }>(page, 'post', '/studies', { title: 'Lab supply, 10,000-step log (demo data)', document })).study.id;
+    for (const t of AMBIENTS) expected.set(t, await serverVerdict(page, { ...document, ambient: { ...document.ambient, temperatureC: t } }));
+  });
+  afterAll(async () => {
+    if (studyId) await api(page, 'delete', `/studies/${studyId}`).catch(() => undefined);
+    for (const session of sessions) await session.close();
+  });
+
+  it.each([
+    ['wide window: full results with chart series', DESKTOP],
+    ['phone: the verdict line', PHONE],
+  ] as [string, Viewport][])('follows ambient edits to the server’s verdict (%s)', async (label, viewport) => {
+    // The reference values differ, so the verdict has to change with each edit.
+    expect(expected.get(90)!.passes).toBe(false);
+    expect(expected.get(35)!.passes).toBe(true);
+    await page.setViewportSize(viewport);
+    await page.goto(`${baseUrl()}/studies/${studyId}/edit`);
+    await page.getByTestId('study-verdict').waitFor({ timeout: 90_000 });
+    // Sections start folded on a phone.
+    const openAll = page.getByRole('button', { name: 'Open all sections' });
+    if ((await openAll.count()) > 0) await openAll.click();
+    const timings: Timing[] = [];
+    for (let i = 0; i < EDITS; i++) {
+      const t = AMBIENTS[i % AMBIENTS.length];
+      const want = expected.get(t)!;
+      const timing = await timedEdit(page, t, want);
+      // The page's verdict is the server's: pass or fail, and the worst margin to 0.1 K.
+      expect(timing.text.startsWith(want.passes ? 'Passes' : 'Fails')).toBe(true);
+      if (want.passes && want.marginK !== null) {
+        const shown = Number(/Passes: ([\d.]+)\sK/.exec(timing.text)?.[1]);
+        expect(Math.abs(shown - want.marginK)).toBeLessThan(0.1);
+      }
+      timings.push(timing);
+    }
+    // The solve runs in a Web Worker, off the page's main thread (playwright lists the page's workers).
+    expect(page.workers().length).toBeGreaterThan(0);
+    const measured = timings.slice(1);
+    process.stdout.write(
+      `Live results, ${label}, 10,000 segments with rail plan and SOA: edit → verdict median ${median(measured.map((m) => m.ms)).toFixed(0)} ms ` +
+        `(${measured.map((m) => m.ms.toFixed(0)).join(', ')} ms); longest main-thread task median ${median(measured.map((m) => m.longestTaskMs)).toFixed(0)} ms ` +
+        `(${measured.map((m) => m.longestTaskMs.toFixed(0)).join(', ')} ms); ` +
+        `solve in the worker median ${fmt(measured.map((m) => m.workerMs))} ms, request to reply ${fmt(measured.map((m) => m.roundTripMs))} ms\n`,
+    );
+  });
+});
