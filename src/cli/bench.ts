@@ -4,6 +4,7 @@ import path from 'node:path';
 import { evaluateStudy, parseStudy } from '../core/study';
 import { benchHeatsinkRanking } from './bench-heatsink';
 import { benchLiveEdit } from './bench-live';
+import { benchLifetime } from './bench-lifetime';
 import { benchNetwork, benchProfile } from './bench-network';
 
 /** Segments of the timed modal run, solved in chunks so memory stays flat. */
@@ -104,6 +105,7 @@ function main(argv: string[]): void {
   const heatsinkRanking = benchHeatsinkRanking();
   const demoStudies = demoStudyTimes();
   const liveEdit = benchLiveEdit();
+  const lifetime = benchLifetime();
 
   const result = {
     segments: SEGMENTS,
@@ -131,6 +133,7 @@ function main(argv: string[]): void {
     heatsinkRanking,
     demoStudies,
     liveEdit,
+    lifetime,
     targets: { segmentsPerSecond: 5e6, speedupVsTrapezoidal: 50, heatsinkRankingSeconds: heatsinkRanking.targetSeconds },
   };
   if (json) {
@@ -154,6 +157,10 @@ function main(argv: string[]): void {
   for (const d of demoStudies) lines.push(`  ${d.file}: ${f(d.milliseconds)} ms, ${d.stretches} stretches, ${d.method}`);
   lines.push(`Live edit: lab supply with a ${liveEdit.segments.toLocaleString('en')}-segment profile, rail plan and SOA (best of 5; the editor's budget is about 100 ms)`);
   lines.push(`  parse ${f(liveEdit.parseMs)} ms; verdict solve ${f(liveEdit.withSoaMs)} ms (${f(liveEdit.withoutSoaMs)} ms without SOA); with chart series ${f(liveEdit.withSeriesMs)} ms`);
+  lines.push(`Lifetime and touch on the ${lifetime.segments.toLocaleString('en')}-segment live-edit study (best CPU time of 9, timed in turn):`);
+  for (const c of lifetime.cases) lines.push(`  ${c.label} (${c.method}): ${f(c.plainMs)} ms → ${f(c.withLifetimeMs)} ms (${c.addedMs >= 0 ? '+' : ''}${f(c.addedMs, 2)} ms)`);
+  lines.push(`  the lifetime work alone on its ${lifetime.historyOnly.points.toLocaleString('en')} solved boundaries: ${f(lifetime.historyOnly.ms)} ms`);
+  lines.push(`Rainflow count of ${lifetime.rainflowPoints.toLocaleString('en')} points: ${f(lifetime.rainflowMs)} ms open, ${f(lifetime.rainflowPeriodicMs)} ms as a repeating block`);
   process.stdout.write(`${lines.join('\n')}\n`);
 }
 

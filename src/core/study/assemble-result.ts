@@ -10,6 +10,10 @@ import type { DeviceSoaResult } from './soa-result-types';
 import { deviceSoaResult } from './soa-result';
 import { railPlanResult } from './rail-result';
 import { adjustableResult } from './adjustable-result';
+import type { SiteResult } from './reliability-result-types';
+import type { JunctionHistory } from './junction-history';
+import { lifetimeResult } from './lifetime-result';
+import { touchResult } from './touch-result';
 
 export type AssembleInput = {
   sm: StudyModel;
@@ -23,6 +27,8 @@ export type AssembleInput = {
   rsaRange?: [number, number][];
   soa?: SoaTracker | null;
   rail?: RailSelection | null;
+  site?: SiteResult;
+  history?: JunctionHistory | null;
 };
 
 /** SOA results by device id, with a warning line for each failure and each SOA warning. */
@@ -134,6 +140,11 @@ export function assembleResult(input: AssembleInput): StudyResult {
   }
   if (input.periodic) result.solver.periodic = input.periodic;
   if (railPlan) result.railPlan = railPlan;
+  if (input.site) result.site = input.site;
+  const lifetime = input.history ? lifetimeResult(doc, input.history, doc.profile.periodic) : undefined;
+  if (lifetime) result.lifetime = lifetime;
+  const touch = touchResult(doc, sinks);
+  if (touch) result.touch = touch;
   assertFinite(result, 'result');
   if (obs.series) result.series = obs.series.build();
   if (obs.rows) {

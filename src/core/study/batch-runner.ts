@@ -119,7 +119,7 @@ export function createBatchRunner(sm: StudyModel, observer: Observer | null, eve
     const result = runProfile(model, { durations: durations.subarray(0, count), inputs: inputs.subarray(0, count * q) }, {
       initial: T,
       watchNodes: obs ? obs.nodes : [],
-      recordBoundaries: obs?.rows != null || soa !== null,
+      recordBoundaries: obs?.rows != null || obs?.history != null || soa !== null,
     });
     if (soa && result.boundaries) {
       for (let k = 0; k < count; k++) {
@@ -134,6 +134,7 @@ export function createBatchRunner(sm: StudyModel, observer: Observer | null, eve
           recordRow(obs, times[k], row, inputs[k * q + m]);
         }
       }
+      if (obs.history && result.boundaries) junctionHistory(obs, result.boundaries, result.peaks);
       result.peaks.forEach((pk, w) => {
         const k = pieceAt(pk.timeS);
         const ta = inputs[k * q + m];
@@ -155,6 +156,25 @@ export function createBatchRunner(sm: StudyModel, observer: Observer | null, eve
       advance(model, T, u, durations[k], T);
     }
     count = 0;
+  }
+
+  /** Each piece's exact start value and the chunk's interior junction peaks, in time order. */
+  function junctionHistory(obs: Observer, boundaries: Float64Array, peaks: { valueC: number; timeS: number }[]): void {
+    const history = obs.history!;
+    const t0 = times[0];
+    for (let d = 0; d < m; d++) {
+      const j = obs.nodes[2 * d];
+      const peak = peaks[2 * d];
+      let pending = peak.timeS > 0;
+      for (let k = 0; k <= count; k++) {
+        const tk = k < count ? times[k] : times[count - 1] + durations[count - 1];
+        if (pending && t0 + peak.timeS < tk) {
+          history.add(d, t0 + peak.timeS, peak.valueC);
+          pending = false;
+        }
+        history.add(d, tk, boundaries[k * N + j]);
+      }
+    }
   }
 
   function pieceAt(tau: number): number {

@@ -62,3 +62,15 @@ export const STRETCH_JOIN_REL_TOL = 1e-9;
  * lies within this of the larger end value, K (it errs hot; the exact search runs otherwise).
  */
 export const SOA_CASE_TOL_K = 1e-3;
+
+/** Lifetime: turning points of one junction history kept for rainflow counting (8 bytes each). */
+export const MAX_HISTORY_TURNING_POINTS = 4_000_000;
+
+/** Lifetime: cycles with a smaller range are left out of the counts reported (they carry no damage to speak of), K. */
+export const MIN_REPORTED_RANGE_K = 0.1;
+
+/** Lifetime: cycle classes listed per device, the most damaging first. */
+export const MAX_LISTED_CYCLES = 5;
+
+/** Lifetime: bars of the cycle histogram at most. */
+export const HISTOGRAM_BINS = 20;

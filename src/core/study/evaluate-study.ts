@@ -15,6 +15,8 @@ import { createSoaTracker } from './soa-tracker';
 import type { EventLog } from './event-log';
 import type { SegmentStart } from './run-passes';
 import { CONVECTION_TOLERANCE, DEFAULT_SERIES_POINTS } from './constants';
+import { siteAdjusted } from './site-adjust';
+import { createJunctionHistory } from './junction-history';
 
 export type EvaluateOptions = {
   /** Points per chart series (≥ 4); 0 leaves series out. Default DEFAULT_SERIES_POINTS (2,000). */
@@ -60,8 +62,10 @@ export function evaluateStudy(written: StudyDocument, options: EvaluateOptions =
   const boundaryRows = options.boundaryRows ?? 0;
   if (!(Number.isInteger(boundaryRows) && boundaryRows >= 0)) throw new RangeError(`boundaryRows: must be a whole number ≥ 0, got ${boundaryRows}`);
 
-  const rail = written.railPlan ? selectRailTaps(written) : null;
-  const doc = rail ? rail.doc : written;
+  const sited = siteAdjusted(written);
+  const atSite = sited ? sited.doc : written;
+  const rail = atSite.railPlan ? selectRailTaps(atSite) : null;
+  const doc = rail ? rail.doc : atSite;
   const sm = createStudyModel(doc, tolerance);
   if (options.maxStretches !== undefined) {
     if (!(Number.isInteger(options.maxStretches) && options.maxStretches > 0)) throw new RangeError(`maxStretches: must be a positive whole number, got ${options.maxStretches}`);
@@ -88,7 +92,9 @@ export function evaluateStudy(written: StudyDocument, options: EvaluateOptions =
     }
   }
 
-  const observer = createObserver(sm, { bucketS, bucketCount, series: seriesPoints > 0, maxRows: boundaryRows });
+  // Lifetime counts one period of a periodic study (its steady state), else the whole run.
+  const history = doc.lifetime ? createJunctionHistory(doc.devices.length, doc.profile.periodic ? passDurationS(doc) : total, doc.lifetime.arrhenius) : null;
+  const observer = createObserver(sm, { bucketS, bucketCount, series: seriesPoints > 0, maxRows: boundaryRows, history });
   const events = createEventLog();
   const soa = createSoaTracker(sm);
   const runner = makeRunner(sm, batch, observer, events, soa);
@@ -109,5 +115,7 @@ export function evaluateStudy(written: StudyDocument, options: EvaluateOptions =
     rsaRange: runner.rsaRange(),
     soa,
     rail,
+    site: sited?.site,
+    history,
   });
 }

@@ -11,6 +11,8 @@ export type { StudyResult, DeviceResult, SinkResult, PeakRow } from './result-ty
 export type { DeviceSoaResult, SoaPointResult, SoaWarningResult } from './soa-result-types';
 export type { RailPlanResult, RailMapResult, RailMapLayer, RailWorstCases, TapSegment } from './rail-result-types';
 export type { AdjustableResult } from './adjustable-result';
+export type { StudySite, StudyLifetime, StudyArrhenius, StudyTouch, TouchRule } from './reliability-types';
+export type { SiteResult, LifetimeResult, DeviceLifetime, CycleClass, CycleHistogram, TouchResult, SinkTouchResult } from './reliability-result-types';
 export type { SoaBoundary, SoaBoundarySegment, SoaLimit, PulseWidth, TransistorKind } from '../soa';
 export type { BestThreshold, CellStatus, TapWorstCase, SensedVoltage } from '../rails';
 export { packageRthKPerW } from './rail-result';

@@ -3,6 +3,7 @@ import type { StudyModel } from './study-model';
 import { createSeriesRecorder, type SeriesRecorder } from './series-recorder';
 import { createBoundaryWriter, type BoundaryWriter } from './boundary-table';
 import { createStretchBounds, type StretchBounds } from './stretch-bounds';
+import type { JunctionHistory } from './junction-history';
 
 /** Chart and CSV names of the watched nodes, in watch order: junctions, cases, sinks, enclosure. */
 export function watchedNodes(sm: StudyModel): { keys: string[]; nodes: number[] } {
@@ -23,7 +24,7 @@ export function watchedNodes(sm: StudyModel): { keys: string[]; nodes: number[] 
   return { keys, nodes };
 }
 
-export type ObserverOptions = { bucketS: number; bucketCount: number; series: boolean; maxRows: number };
+export type ObserverOptions = { bucketS: number; bucketCount: number; series: boolean; maxRows: number; history?: JunctionHistory | null };
 
 /**
  * Everything a run reports, gathered as it goes: exact peaks of the watched nodes, time of
@@ -42,6 +43,8 @@ export type Observer = {
   partEnergyJ: Float64Array;
   series: SeriesRecorder | null;
   rows: BoundaryWriter | null;
+  /** Junction values for rainflow counting (a study with `lifetime`). */
+  history: JunctionHistory | null;
 };
 
 export function createObserver(sm: StudyModel, options: ObserverOptions): Observer {
@@ -59,6 +62,7 @@ export function createObserver(sm: StudyModel, options: ObserverOptions): Observ
     partEnergyJ: new Float64Array(deviceCount),
     series: options.series ? createSeriesRecorder([...keys, 'ambient'], options.bucketS, options.bucketCount) : null,
     rows: options.maxRows > 0 ? createBoundaryWriter([...keys, 'ambient'], options.maxRows) : null,
+    history: options.history ?? null,
   };
 }
 
@@ -69,6 +73,7 @@ export function sampleState(obs: Observer, t: number, T: ArrayLike<number>, ambi
     for (let w = 0; w < nodes.length; w++) obs.series.add(w, t, T[nodes[w]]);
     obs.series.add(nodes.length, t, ambientC);
   }
+  if (obs.history) for (let w = 0; w < obs.targetC.length; w++) obs.history.add(w, t, T[nodes[2 * w]]);
   recordRow(obs, t, T, ambientC);
 }
 
@@ -175,6 +180,7 @@ export function observeStretch(
       const pk = peakInSegment(model, T, u, h, nodes[w]);
       offerPeak(obs, w, t + pk.timeS, pk.valueC, ambientC, () => advance(model, T, u, pk.timeS, scratch));
       if (series && pk.timeS > 0 && pk.timeS < h) series.add(w, t + pk.timeS, pk.valueC);
+      if (obs.history && w % 2 === 0 && w < 2 * devices && pk.timeS > 0 && pk.timeS < h) obs.history.add(w / 2, t + pk.timeS, pk.valueC);
     }
     // Junctions are the even watch slots of the first 2 × devices.
     if (w % 2 === 0 && w < 2 * devices && upper >= obs.targetC[w / 2]) {

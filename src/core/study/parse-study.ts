@@ -17,8 +17,9 @@ import { parseDevice } from './parse-device';
 import { parseProfile } from './parse-profile';
 import { parseRailPlan } from './parse-rail-plan';
 import { DEFAULT_MARGIN_K } from './constants';
+import { parseLifetime, parseSite, parseTouch } from './parse-reliability';
 
-const TOP_KEYS = ['format', 'version', 'title', 'description', 'notes', 'marginK', 'ambient', 'enclosure', 'sinks', 'devices', 'profile', 'railPlan'];
+const TOP_KEYS = ['format', 'version', 'title', 'description', 'notes', 'marginK', 'ambient', 'enclosure', 'sinks', 'devices', 'profile', 'railPlan', 'site', 'lifetime', 'touch'];
 const RESERVED_IDS = ['ambient', 'enclosure'];
 
 function checkUniqueIds(items: { id: string }[], listPath: string, taken: Map<string, string>): void {
@@ -105,5 +106,8 @@ export function parseStudy(json: unknown): StudyDocument {
   const doc: StudyDocument = { format: STUDY_FORMAT, version: STUDY_VERSION, title, description, marginK, ambient, sinks, devices, profile };
   if (enclosure) doc.enclosure = enclosure;
   if (railPlan) doc.railPlan = railPlan;
+  if (root.site !== undefined) doc.site = parseSite(root.site, 'site');
+  if (root.lifetime !== undefined) doc.lifetime = parseLifetime(root.lifetime, 'lifetime');
+  if (root.touch !== undefined) doc.touch = parseTouch(root.touch, 'touch', sinks);
   return doc;
 }

@@ -5,6 +5,7 @@ import type { DeviceKind } from './types';
 import type { DeviceSoaResult } from './soa-result-types';
 import type { RailPlanResult } from './rail-result-types';
 import type { AdjustableResult } from './adjustable-result';
+import type { LifetimeResult, SiteResult, TouchResult } from './reliability-result-types';
 
 /** Node temperatures (time, the table's columns) at the peak of `node`. */
 export type PeakRow = { node: string; row: Float64Array };
@@ -71,6 +72,12 @@ export type StudyResult = {
   soaPasses: boolean;
   /** With a rail plan: its map, worst cases, best thresholds, required Rθsa and the taps selected. */
   railPlan?: RailPlanResult;
+  /** With `site`: the altitude and the factor it put on each sink's Rθsa. */
+  site?: SiteResult;
+  /** With `lifetime`: rainflow cycles of each junction, damage per day and life in years. */
+  lifetime?: LifetimeResult;
+  /** With `touch`: each sink's peak surface temperature against its touch limit. */
+  touch?: TouchResult;
   /** Events in time order (at most MAX_LISTED_EVENTS), and how many of each kind happened. */
   events: StudyEvent[];
   eventCounts: Record<EventKind, number>;

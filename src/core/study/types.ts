@@ -2,6 +2,7 @@ import type { CauerStage, FosterTerm } from '../thermal';
 import type { CurvePoint } from '../electrical';
 import type { SoaModel } from '../soa';
 import type { OutputRange, RailPlan, Relay } from '../rails';
+import type { StudyLifetime, StudySite, StudyTouch } from './reliability-types';
 
 /**
  * The study document, format "junctura-study" version 1, as returned by `parseStudy`:
@@ -129,4 +130,8 @@ export type StudyDocument = {
   devices: Device[];
   profile: Profile;
   railPlan?: StudyRailPlan;
+  /** Site altitude (derates convection), life from temperature cycles, touch limits. */
+  site?: StudySite;
+  lifetime?: StudyLifetime;
+  touch?: StudyTouch;
 };
