@@ -67,7 +67,10 @@ export function isolateRoots(ws: ExpSumWorkspace, t0: number, t1: number, level:
   const { coef, rate, roots, termCount, rootCount } = ws;
   termCount[0] = ws.count;
   let depth = 0;
-  while (termCount[depth] > 1) {
+  // A level whose coefficients change sign at most once has at most one root on the whole
+  // line (Descartes' rule for exponential sums): bracketing [t0, t1] finds it, so the
+  // descent stops there instead of going down to a single term.
+  while (termCount[depth] > 1 && !(depth >= level && changesAtMostOnce(coef, depth * M, termCount[depth]))) {
     const src = depth * M;
     const dst = src + M;
     const r0 = rate[src];
@@ -83,7 +86,7 @@ export function isolateRoots(ws: ExpSumWorkspace, t0: number, t1: number, level:
     depth++;
   }
   if (level > depth) return 0;
-  rootCount[depth] = 0;
+  rootCount[depth] = termCount[depth] > 1 ? bracketRoot(ws, depth, t0, t1) : 0;
   for (let L = depth - 1; L >= level; L--) {
     const base = L * M;
     const critical = (L + 1) * M;
@@ -94,7 +97,7 @@ export function isolateRoots(ws: ExpSumWorkspace, t0: number, t1: number, level:
       const b = j < rootCount[L + 1] ? roots[critical + j] : t1;
       if (!(b > a)) continue;
       const eb = shifted(coef, rate, base, termCount[L], b);
-      if (ea * eb < 0) roots[base + count++] = refine(coef, rate, base, termCount[L], a, b, ea, t1 - t0);
+      if (ea * eb < 0) roots[base + count++] = refine(coef, rate, base, termCount[L], a, b, ea, eb, t1 - t0);
       else if (eb === 0 && b < t1) roots[base + count++] = b;
       a = b;
       ea = eb;
@@ -102,6 +105,25 @@ export function isolateRoots(ws: ExpSumWorkspace, t0: number, t1: number, level:
     rootCount[L] = count;
   }
   return rootCount[level];
+}
+
+function changesAtMostOnce(coef: Float64Array, base: number, count: number): boolean {
+  let changes = 0;
+  for (let k = base + 1; k < base + count; k++) if (coef[k] > 0 !== coef[k - 1] > 0 && ++changes > 1) return false;
+  return true;
+}
+
+/** The one possible root of a level with at most one sign change, if it lies in (t0, t1). */
+function bracketRoot(ws: ExpSumWorkspace, L: number, t0: number, t1: number): number {
+  const base = L * ws.maxTerms;
+  const n = ws.termCount[L];
+  const ea = shifted(ws.coef, ws.rate, base, n, t0);
+  const eb = shifted(ws.coef, ws.rate, base, n, t1);
+  if (ea * eb < 0) {
+    ws.roots[base] = refine(ws.coef, ws.rate, base, n, t0, t1, ea, eb, t1 - t0);
+    return 1;
+  }
+  return 0;
 }
 
 /** e^(r_0 τ) g(τ) for the sum at base: same sign as g, no underflow at large τ. */
@@ -112,9 +134,20 @@ export function shifted(coef: Float64Array, rate: Float64Array, base: number, co
   return v;
 }
 
+/** A few units of roundoff of ln P − ln N (a relative difference of P and N). */
+const ROUNDING_LEVEL = 8 * Number.EPSILON;
+
 /**
- * Safeguarded Newton on e^(r_0 τ) g(τ) (sum at base) in a bracket [a, b] where it changes
- * sign (ea is its value at a); bisection keeps it converging whatever the shape.
+ * Root of g(τ) = Σ c_k e^(−r_k τ) (sum at base) in a bracket [a, b] where it changes sign
+ * (ea, eb: values of the shifted sum at a and b; only their signs are used).
+ *
+ * Newton runs on φ(τ) = ln P(τ) − ln N(τ), P and N the sums of the positive and of the
+ * negative terms, which has the same sign as g. Each of ln P and ln N is a log-sum-exp,
+ * close to linear in τ, so φ is nearly linear where g is steeply exponential (a two-term
+ * sum is solved in one step), and each is evaluated shifted by its slowest rate, so
+ * neither underflows however far apart the rates are. A step that leaves the bracket is
+ * replaced by bisection. It stops when the bracket is ROOT_TIME_REL_TOL of the span or φ
+ * is down to rounding noise.
  */
 export function refine(
   coef: Float64Array,
@@ -124,23 +157,47 @@ export function refine(
   a: number,
   b: number,
   ea: number,
+  eb: number,
   span: number,
 ): number {
   const tol = ROOT_TIME_REL_TOL * span;
-  const r0 = rate[base];
+  // Slowest rate of each sign: the shift of its group.
+  let rp = Infinity;
+  let rn = Infinity;
+  for (let k = 0; k < count; k++) {
+    const c = coef[base + k];
+    const r = rate[base + k];
+    if (c > 0 && r < rp) rp = r;
+    else if (c < 0 && r < rn) rn = r;
+  }
+  const aPositive = ea > 0 || (ea === 0 && eb < 0);
+  if (!(rp < Infinity && rn < Infinity)) return 0.5 * (a + b);
   let t = 0.5 * (a + b);
   for (let it = 0; it < ROOT_MAX_ITERATIONS && b - a > tol; it++) {
-    let v = 0;
-    let dv = 0;
+    let p = 0;
+    let dp = 0;
+    let q = 0;
+    let dq = 0;
     for (let k = 0; k < count; k++) {
-      const e = coef[base + k] * Math.exp(-(rate[base + k] - r0) * t);
-      v += e;
-      dv -= (rate[base + k] - r0) * e;
+      const c = coef[base + k];
+      const r = rate[base + k];
+      if (c > 0) {
+        const e = c * Math.exp(-(r - rp) * t);
+        p += e;
+        dp -= (r - rp) * e;
+      } else {
+        const e = -c * Math.exp(-(r - rn) * t);
+        q += e;
+        dq -= (r - rn) * e;
+      }
     }
-    if (v === 0) return t;
-    if (v * ea > 0) a = t;
+    // φ = ln P − ln N with P = e^(−rp τ) p and N = e^(−rn τ) q.
+    const phi = Math.log(p) - Math.log(q) + (rn - rp) * t;
+    if (phi === 0 || (phi < 0 ? -phi : phi) <= ROUNDING_LEVEL) return t;
+    if (phi > 0 === aPositive) a = t;
     else b = t;
-    const next = t - v / dv;
+    const slope = dp / p - dq / q + (rn - rp);
+    const next = t - phi / slope;
     if (next > a && next < b) {
       if (Math.abs(next - t) <= tol) return next;
       t = next;

@@ -2,7 +2,7 @@ import { checkIndex, checkNumber, checkVector } from './check-input';
 import { ROOT_TIME_REL_TOL } from './constants';
 import { isolateRoots } from './exp-sum-roots';
 import { modalEquilibrium, modalFromTemperatures } from './modal-state';
-import { evaluateSum, loadNodeResponse } from './node-response';
+import { evaluateSum, loadNodeResponse, signChanges } from './node-response';
 import type { CrossingDirection, ModalModel } from './types';
 
 /**
@@ -36,6 +36,9 @@ export function firstCrossing(
   loadNodeResponse(model, sum, nodeIndex, x, xInf, u, levelC, direction === 'up' ? 1 : -1);
   if (evaluateSum(sum, 0) >= 0) return 0;
   if (h === 0) return null;
+  // All coefficients of one sign: g keeps the sign of g(0) < 0 (Descartes' rule for
+  // exponential sums, see exp-sum-roots.ts), so the level is never reached.
+  if (signChanges(sum, 0) === 0) return null;
   const count = isolateRoots(sum, 0, h, 0);
   let t: number;
   if (count > 0) t = sum.roots[0];

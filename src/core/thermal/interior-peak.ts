@@ -30,7 +30,7 @@ export function interiorPeak(
     const d0 = shifted(ws.coef, ws.rate, 0, ws.count, 0);
     const dh = shifted(ws.coef, ws.rate, 0, ws.count, h);
     if (!(d0 > 0 && dh < 0)) return false;
-    const t = refine(ws.coef, ws.rate, 0, ws.count, 0, h, d0, h);
+    const t = refine(ws.coef, ws.rate, 0, ws.count, 0, h, d0, dh, h);
     out[0] = valueAt(rates, w, base, dev, a0, t);
     out[1] = t;
     return true;
