@@ -4,6 +4,7 @@ import path from 'node:path';
 import { evaluateStudy, parseStudy } from '../core/study';
 import { benchHeatsinkRanking } from './bench-heatsink';
 import { benchLiveEdit } from './bench-live';
+import { benchTolerance } from './bench-tolerance';
 import { benchLifetime } from './bench-lifetime';
 import { benchNetwork, benchProfile } from './bench-network';
 
@@ -51,7 +52,7 @@ function demoStudyTimes() {
     });
 }
 
-function main(argv: string[]): void {
+async function main(argv: string[]): Promise<void> {
   const json = argv.includes('--json');
   const { spec, junctions } = benchNetwork();
   const model = compileNetwork(spec);
@@ -106,6 +107,7 @@ function main(argv: string[]): void {
   const demoStudies = demoStudyTimes();
   const liveEdit = benchLiveEdit();
   const lifetime = benchLifetime();
+  const tolerance = await benchTolerance();
 
   const result = {
     segments: SEGMENTS,
@@ -134,6 +136,7 @@ function main(argv: string[]): void {
     demoStudies,
     liveEdit,
     lifetime,
+    tolerance,
     targets: { segmentsPerSecond: 5e6, speedupVsTrapezoidal: 50, heatsinkRankingSeconds: heatsinkRanking.targetSeconds },
   };
   if (json) {
@@ -161,7 +164,13 @@ function main(argv: string[]): void {
   for (const c of lifetime.cases) lines.push(`  ${c.label} (${c.method}): ${f(c.plainMs)} ms → ${f(c.withLifetimeMs)} ms (${c.addedMs >= 0 ? '+' : ''}${f(c.addedMs, 2)} ms)`);
   lines.push(`  the lifetime work alone on its ${lifetime.historyOnly.points.toLocaleString('en')} solved boundaries: ${f(lifetime.historyOnly.ms)} ms`);
   lines.push(`Rainflow count of ${lifetime.rainflowPoints.toLocaleString('en')} points: ${f(lifetime.rainflowMs)} ms open, ${f(lifetime.rainflowPeriodicMs)} ms as a repeating block`);
+  lines.push(`Tolerance sweep: ${tolerance.runs.toLocaleString('en')} Monte Carlo runs of a ${tolerance.segments.toLocaleString('en')}-segment study (two devices in parallel, every spread)`);
+  lines.push(`  worker pool of ${tolerance.threads} threads: ${f(tolerance.poolWallSeconds)} s wall → ${f(tolerance.poolRunsPerSecond)} runs/s (${f(tolerance.speedup)}× one thread)`);
+  lines.push(`  one thread: ${f(tolerance.singleThreadRunsPerSecond)} runs/s over ${tolerance.singleThreadRuns} runs, ${f(tolerance.singleThreadEstimatedSecondsForAll)} s for all (an estimate, not a run)`);
   process.stdout.write(`${lines.join('\n')}\n`);
 }
 
-main(process.argv.slice(2));
+main(process.argv.slice(2)).catch((err) => {
+  console.error(err);
+  process.exit(1);
+});

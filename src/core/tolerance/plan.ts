@@ -57,7 +57,10 @@ export function planTolerance(doc: StudyDocument, spec: ToleranceSpec): Toleranc
     const most = Math.max(1, Math.floor(MAX_TOTAL_SEGMENTS / segmentsPerRun));
     throw new RangeError(`runs: ${runs} runs × ${segmentsPerRun} segments exceeds the ${MAX_TOTAL_SEGMENTS.toExponential(0)} segments one sweep may solve; at most ${most} runs for this study`);
   }
-  return { doc, spec, inputs, skipped, shareGroup: shareGroup(doc), runs, segmentsPerRun };
+  // A sweep reports junction peaks only: the SOA check, the costliest part of a solve after the
+  // network itself, is left out of every run.
+  const peaksOnly: StudyDocument = { ...doc, devices: doc.devices.map(({ soa: _soa, ...device }) => device) };
+  return { doc: peaksOnly, spec, inputs, skipped, shareGroup: shareGroup(doc), runs, segmentsPerRun };
 }
 
 /**
