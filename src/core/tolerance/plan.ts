@@ -1,5 +1,6 @@
 import { evaluateStudy, type StudyDocument } from '../study';
 import { MAX_AMBIENT_SHIFT_K, MAX_CORNER_INPUTS, MAX_RUNS, MAX_SPREAD_PCT, MAX_TOTAL_SEGMENTS } from './constants';
+import { fastPathApplies, fastPeaks } from './fast-peaks';
 import { activeInputs, centre, shareGroup } from './inputs';
 import { deviationsOf, perturbStudy } from './perturb';
 import { mulberry32, runSeed, standardNormal } from './random';
@@ -15,6 +16,8 @@ export type TolerancePlan = {
   runs: number;
   /** Segments one run solves (profile segments × repeat). */
   segmentsPerRun: number;
+  /** Runs take the peak scan (linear study, constant ambient) instead of the full pipeline. */
+  fast: boolean;
 };
 
 const SPREADS = ['rthJcPct', 'rthSaPct', 'interfacePct', 'linePct', 'loadPct', 'sharePct'] as const;
@@ -60,7 +63,7 @@ export function planTolerance(doc: StudyDocument, spec: ToleranceSpec): Toleranc
   // A sweep reports junction peaks only: the SOA check, the costliest part of a solve after the
   // network itself, is left out of every run.
   const peaksOnly: StudyDocument = { ...doc, devices: doc.devices.map(({ soa: _soa, ...device }) => device) };
-  return { doc: peaksOnly, spec, inputs, skipped, shareGroup: shareGroup(doc), runs, segmentsPerRun };
+  return { doc: peaksOnly, spec, inputs, skipped, shareGroup: shareGroup(doc), runs, segmentsPerRun, fast: fastPathApplies(doc) };
 }
 
 /**
@@ -86,6 +89,7 @@ export function runDeviations(plan: TolerancePlan, index: number, out = new Floa
 /** Peak junction temperature of every device (°C, device order) with the given deviations. */
 export function evaluateDeviations(plan: TolerancePlan, values: ArrayLike<number>): RunPeaks {
   const doc = perturbStudy(plan.doc, deviationsOf(plan.inputs, values), plan.shareGroup);
+  if (plan.fast) return fastPeaks(doc);
   const result = evaluateStudy(doc, { seriesPoints: 0 });
   return Float64Array.from(plan.doc.devices, (d) => result.devices[d.id].peakJunctionC);
 }
