@@ -8,6 +8,7 @@ import { spacing } from '@/constants/theme';
 
 import { DeviceTable } from './components/device-table';
 import { EventList } from './components/event-list';
+import { LifetimePanel } from './components/lifetime-panel';
 import { RailPlanPanel } from './components/rail-plan-panel';
 import { ResultSection } from './components/result-section';
 import { ResultsCaution } from './components/results-caution';
@@ -97,6 +98,11 @@ function Solved({ result, mains, onPickTime }: SolvedProps) {
             selectedS={cursorS}
             onSelectTime={setCursorS}
           />
+        </ResultSection>
+      ) : null}
+      {result.lifetime || result.touch || result.site ? (
+        <ResultSection title="Life, touch and site">
+          <LifetimePanel lifetime={result.lifetime} touch={result.touch} site={result.site} />
         </ResultSection>
       ) : null}
       <ResultsCaution hotSinks={Object.values(result.sinks)} mains={mains} />
