@@ -215,14 +215,39 @@ function fillInputSlot(
 ): void {
   const xb = slot * n;
   for (let j = 0; j < q; j++) cacheU[slot * q + j] = inputs[row + j];
-  for (let k = 0; k < n; k++) {
-    let v = 0;
-    for (let j = 0; j < q; j++) v += columns[j * n + k] * inputs[row + j];
-    cacheXInf[xb + k] = v;
+  // Up to four inputs (three parts and the ambient) unrolled: a loop over so few inputs
+  // inside the loop over modes costs more than the arithmetic.
+  const u0 = inputs[row];
+  const u1 = q > 1 ? inputs[row + 1] : 0;
+  const u2 = q > 2 ? inputs[row + 2] : 0;
+  const u3 = q > 3 ? inputs[row + 3] : 0;
+  if (q === 1) {
+    for (let k = 0; k < n; k++) cacheXInf[xb + k] = columns[k] * u0;
+  } else if (q === 2) {
+    for (let k = 0; k < n; k++) cacheXInf[xb + k] = columns[k] * u0 + columns[n + k] * u1;
+  } else if (q === 3) {
+    for (let k = 0; k < n; k++) cacheXInf[xb + k] = columns[k] * u0 + columns[n + k] * u1 + columns[2 * n + k] * u2;
+  } else if (q === 4) {
+    for (let k = 0; k < n; k++) {
+      cacheXInf[xb + k] = columns[k] * u0 + columns[n + k] * u1 + columns[2 * n + k] * u2 + columns[3 * n + k] * u3;
+    }
+  } else {
+    for (let k = 0; k < n; k++) {
+      let v = 0;
+      for (let j = 0; j < q; j++) v += columns[j * n + k] * inputs[row + j];
+      cacheXInf[xb + k] = v;
+    }
   }
   for (let w = 0; w < nw; w++) {
-    let v = 0;
-    for (let j = 0; j < q; j++) v += watchSteady[w * q + j] * inputs[row + j];
+    const b = w * q;
+    let v = watchSteady[b] * u0;
+    if (q <= 4) {
+      if (q > 1) v += watchSteady[b + 1] * u1;
+      if (q > 2) v += watchSteady[b + 2] * u2;
+      if (q > 3) v += watchSteady[b + 3] * u3;
+    } else {
+      for (let j = 1; j < q; j++) v += watchSteady[b + j] * inputs[row + j];
+    }
     cacheA0[slot * nw + w] = v;
   }
 }
