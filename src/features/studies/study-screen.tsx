@@ -11,6 +11,7 @@ import { ReviewPanel } from '@/features/review/review-panel';
 import { RankingPanel } from '@/features/heatsinks/components/ranking-panel';
 import { HistoryPanel } from '@/features/revisions/history-panel';
 import { StudyResults } from '@/features/results/study-results';
+import { TolerancePanel } from '@/features/tolerance/components/tolerance-panel';
 
 import { useStudy } from './api';
 import { BackLink } from './components/back-link';
@@ -66,6 +67,7 @@ export function StudyScreen({ id }: StudyScreenProps) {
         </Card>
         <StudyResults document={data.document} />
         <RankingPanel study={data} />
+        <TolerancePanel study={data} />
         <StudyInputs document={data.document} />
         <CommentsPanel study={data} />
         <HistoryPanel study={data} />
