@@ -11,7 +11,7 @@ export const DOCUMENT = 'document';
 /** Form field name of a document path (`ambient.temperatureC` → `document.ambient.temperatureC`). */
 export const inDocument = (path: string): string => (path ? at(DOCUMENT, path) : DOCUMENT);
 
-export type SectionKey = 'study' | 'devices' | 'thermal' | 'ambient' | 'rails' | 'profile';
+export type SectionKey = 'study' | 'devices' | 'thermal' | 'ambient' | 'rails' | 'profile' | 'site';
 
 export const SECTION_TITLES: Record<SectionKey, string> = {
   study: 'Study and margin',
@@ -20,9 +20,10 @@ export const SECTION_TITLES: Record<SectionKey, string> = {
   ambient: 'Ambient',
   rails: 'Rail plan',
   profile: 'Load profile',
+  site: 'Site, life and touch',
 };
 
-export const SECTION_ORDER: readonly SectionKey[] = ['study', 'devices', 'thermal', 'ambient', 'rails', 'profile'];
+export const SECTION_ORDER: readonly SectionKey[] = ['study', 'devices', 'thermal', 'ambient', 'rails', 'profile', 'site'];
 
 /** The editor section a form field belongs to. */
 export function sectionOf(field: string): SectionKey {
@@ -33,5 +34,6 @@ export function sectionOf(field: string): SectionKey {
   if (head === 'ambient') return 'ambient';
   if (head === 'railPlan') return 'rails';
   if (head === 'profile') return 'profile';
+  if (head === 'site' || head === 'lifetime' || head === 'touch') return 'site';
   return 'study';
 }

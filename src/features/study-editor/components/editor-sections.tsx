@@ -13,6 +13,7 @@ import { DevicesSection } from './devices-section';
 import { EditorSection } from './editor-section';
 import { ProfileSection } from './profile-section';
 import { RailPlanSection } from './rail-plan-section';
+import { SiteLifeSection, siteLifeSummary } from './site-life-section';
 import { StudyFields } from './study-fields';
 import { ThermalSection } from './thermal-section';
 
@@ -39,6 +40,8 @@ function summaryOf(key: SectionKey, values: EditorValues): string {
       return doc.ambient?.profile ? `${plural(doc.ambient.profile.length, 'point', 'points')} over time` : typeof doc.ambient?.temperatureC === 'number' ? `${doc.ambient.temperatureC} °C` : '—';
     case 'rails':
       return doc.railPlan ? 'Tap selection from the rail plan' : 'None';
+    case 'site':
+      return siteLifeSummary(doc);
     case 'profile': {
       const steps = profileSteps(doc.profile);
       return `${plural(steps.segmentCount, 'segment', 'segments')}, ${formatDuration(steps.passS)} per pass`;
@@ -62,6 +65,8 @@ export const EditorSections = memo(function EditorSections({ values, problems, o
         return <AmbientSection ambient={doc.ambient} />;
       case 'rails':
         return <RailPlanSection plan={doc.railPlan} />;
+      case 'site':
+        return <SiteLifeSection document={doc} />;
       case 'profile':
         return <ProfileSection profile={doc.profile} deviceIds={deviceIds} railPlan={doc.railPlan !== undefined} />;
     }
