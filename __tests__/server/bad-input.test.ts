@@ -60,6 +60,12 @@ const ENDPOINTS: Endpoint[] = [
     bad: [{}, { name: 'H', rthKPerW: 'low' }, { name: 'H', rthKPerW: -1 }, { name: 'H', rthKPerW: '__INF__' }, { name: 'H', rthKPerW: 1, devicesPerSink: 2.5 }, { name: 'H', rthKPerW: 1, forcedAir: 'fast' }],
   },
   { name: 'solve', method: 'post', path: () => '/api/solve', bad: [{}, { document: null }, { document: { format: 'junctura-study', version: 2 } }] },
+  {
+    name: 'tolerance sweep',
+    method: 'post',
+    path: () => `/api/studies/${studyId}/tolerance`,
+    bad: [{}, { mode: 'sideways' }, { mode: 'corners', rthSaPct: '__INF__' }, { mode: 'corners', rthJcPct: -5 }, { mode: 'monte-carlo', runs: 0 }, { mode: 'monte-carlo', seed: 1.5 }, { mode: 'corners', distributions: { rthSa: 'lognormal' } }, { mode: 'corners', extra: 1 }],
+  },
 ];
 
 async function counts() {
