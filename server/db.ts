@@ -145,22 +145,69 @@ export function createDb(databaseUrl: string, options: DbOptions = {}): Db {
 
 /**
  * Runs `fn` (migrations, the first seed) while no other server process on the same database
- * does: on PostgreSQL under a transaction-scoped advisory lock held on a connection of its own
- * while `fn` uses others. SQLite deployments are one process, so `fn` just runs.
+ * does, so processes started together do not both migrate or both seed. PostgreSQL: a
+ * transaction-scoped advisory lock, held on a connection of its own while `fn` uses others.
+ * SQLite (one host): a lock file beside the database holding the owner's pid; a file left
+ * by a process that died is taken over.
  */
 export async function withStartupLock<T>(db: Db, fn: () => Promise<T>): Promise<T> {
-  if (db.dialect !== 'postgres') return fn();
-  const t = await db.sequelize.transaction();
+  if (db.dialect === 'postgres') {
+    const t = await db.sequelize.transaction();
+    try {
+      await db.sequelize.query('SELECT pg_advisory_xact_lock(:key)', { replacements: { key: STARTUP_LOCK_KEY }, transaction: t });
+      const result = await fn();
+      await t.commit();
+      return result;
+    } catch (err) {
+      await t.rollback().catch(() => undefined);
+      throw err;
+    }
+  }
+  const storage = (db.sequelize as unknown as { options: { storage?: string } }).options.storage ?? ':memory:';
+  if (storage === ':memory:') return fn();
+  const lockFile = `${storage}.startup-lock`;
+  const deadline = Date.now() + STARTUP_LOCK_WAIT_MS;
+  for (;;) {
+    try {
+      fs.writeFileSync(lockFile, String(process.pid), { flag: 'wx' });
+      break;
+    } catch (err) {
+      if ((err as NodeJS.ErrnoException).code !== 'EEXIST') throw err;
+      if (!lockHolderAlive(lockFile)) {
+        fs.rmSync(lockFile, { force: true });
+        continue;
+      }
+      if (Date.now() > deadline) throw new Error(`${lockFile} is held by another process for over ${STARTUP_LOCK_WAIT_MS / 1000} s`);
+      await new Promise((resolve) => setTimeout(resolve, 100));
+    }
+  }
   try {
-    await db.sequelize.query('SELECT pg_advisory_xact_lock(:key)', { replacements: { key: STARTUP_LOCK_KEY }, transaction: t });
-    const result = await fn();
-    await t.commit();
-    return result;
-  } catch (err) {
-    await t.rollback().catch(() => undefined);
-    throw err;
+    return await fn();
+  } finally {
+    fs.rmSync(lockFile, { force: true });
   }
 }
 
+function lockHolderAlive(lockFile: string): boolean {
+  let pid: number;
+  try {
+    pid = Number(fs.readFileSync(lockFile, 'utf8'));
+  } catch {
+    return true; // being written or just removed: look again
+  }
+  if (!Number.isInteger(pid) || pid <= 0) {
+    // Created but not yet written: alive for a moment, then taken for a leftover.
+    const stat = fs.statSync(lockFile, { throwIfNoEntry: false });
+    return !!stat && Date.now() - stat.mtimeMs < 5000;
+  }
+  try {
+    process.kill(pid, 0);
+    return true;
+  } catch (err) {
+    return (err as NodeJS.ErrnoException).code === 'EPERM';
+  }
+}
+
+const STARTUP_LOCK_WAIT_MS = 120_000;
 /** Any fixed 64-bit number; it names the lock in pg_locks. */
 const STARTUP_LOCK_KEY = 7_405_221_903;

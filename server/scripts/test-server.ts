@@ -19,9 +19,10 @@ export type TestServer = { url: string; dbFile: string; child: ChildProcess; sto
 
 /**
  * Starts the real API server (no web export) in its own process on a free loopback port with
- * a fresh database, seeded with the demo data, for load and crash scripts.
+ * a fresh database, seeded with the demo data, for load and crash scripts. `databaseUrl`
+ * (e.g. postgres://…) replaces the SQLite file; several servers may share one database.
  */
-export async function startTestServer(options: { dbFile?: string } = {}): Promise<TestServer> {
+export async function startTestServer(options: { dbFile?: string; databaseUrl?: string } = {}): Promise<TestServer> {
   const dbFile = options.dbFile ?? path.join(fs.mkdtempSync(path.join(os.tmpdir(), 'junctura-load-')), 'load.sqlite');
   const port = await freePort();
   const url = `http://127.0.0.1:${port}`;
@@ -30,7 +31,7 @@ export async function startTestServer(options: { dbFile?: string } = {}): Promis
     NODE_ENV: 'development' as const,
     PORT: String(port),
     HOST: '127.0.0.1',
-    DATABASE_URL: `sqlite:${dbFile}`,
+    DATABASE_URL: options.databaseUrl ?? `sqlite:${dbFile}`,
     SESSION_SECRET: 'load-test-secret-load-test-secret-00',
     BCRYPT_COST: '10',
     AUTH_RATE_LIMIT: '100000',
