@@ -15,7 +15,7 @@ export function SensitivityBars({ ranking, method }: SensitivityBarsProps) {
     <View role="list" aria-label="Inputs by their pull on the peak" style={styles.list}>
       {ranking.map((s) => (
         <View key={s.key} role="listitem" aria-label={`${s.label}: ${valueText(s, method)}`} style={styles.row}>
-          <Text style={styles.label} numberOfLines={1}>
+          <Text style={styles.label} numberOfLines={2}>
             {s.label}
           </Text>
           <View style={styles.track}>
@@ -33,7 +33,7 @@ export function SensitivityBars({ ranking, method }: SensitivityBarsProps) {
 const styles = StyleSheet.create({
   list: { gap: spacing.xs },
   row: { flexDirection: 'row', alignItems: 'center', gap: spacing.sm },
-  label: { width: 130, flexShrink: 0 },
+  label: { width: 136, flexShrink: 0 },
   track: { flex: 1, height: 14, backgroundColor: color.surfaceMuted, borderRadius: radius.sm, overflow: 'hidden' },
   bar: { height: 14, backgroundColor: chartColor.devices[0], borderRadius: radius.sm },
   negative: { backgroundColor: chartColor.devices[1] },
