@@ -4,3 +4,4 @@ export * from './team';
 export * from './catalogues';
 export * from './parts';
 export * from './tolerance';
+export * from './team-settings';

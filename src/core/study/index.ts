@@ -26,3 +26,5 @@ export { DEFAULT_CONVECTION_EXPONENT } from './parse-sink';
 export { buildStudyNetwork, packageStages } from './build-network';
 export { ambientIntervals } from './ambient-intervals';
 export * from './constants';
+export { BUILT_IN_DEFAULTS, EMPTY_STUDY_DEFAULTS, SOURCED_DEFAULTS, checkDefaults, defaultSections } from './study-defaults';
+export type { StudyDefaults, DefaultSections, DefaultsProblem } from './study-defaults';
