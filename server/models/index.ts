@@ -12,9 +12,10 @@ import { Review } from './review';
 import { Revision } from './revision';
 import { Study } from './study';
 import { Team } from './team';
+import { TeamSetting } from './team-setting';
 import { User } from './user';
 
-const ALL = { User, Team, Membership, Study, Revision, Review, Comment, Invitation, PasswordReset, MailMessage, AuditEvent, Heatsink, InterfaceMaterial, Part };
+const ALL = { User, Team, Membership, Study, Revision, Review, Comment, Invitation, PasswordReset, MailMessage, AuditEvent, Heatsink, InterfaceMaterial, Part, TeamSetting };
 export type Models = typeof ALL;
 
 const fk = (name: string, field: string, allowNull = false) => ({ foreignKey: { name, field, allowNull } });
@@ -47,11 +48,13 @@ export function initModels(sequelize: Sequelize): Models {
   Team.hasMany(Heatsink, { ...fk('teamId', 'team_id'), as: 'heatsinks' });
   Team.hasMany(InterfaceMaterial, { ...fk('teamId', 'team_id'), as: 'interfaceMaterials' });
   Team.hasMany(Part, { ...fk('teamId', 'team_id'), as: 'parts' });
+  Team.hasOne(TeamSetting, { ...fk('teamId', 'team_id'), as: 'settings' });
+  TeamSetting.belongsTo(User, { ...fk('updatedById', 'updated_by_id', true), as: 'updatedBy' });
 
   return ALL;
 }
 
-export { AuditEvent, Comment, Heatsink, InterfaceMaterial, Invitation, MailMessage, Membership, Part, PasswordReset, Review, Revision, Study, Team, User };
+export { AuditEvent, Comment, Heatsink, InterfaceMaterial, Invitation, MailMessage, Membership, Part, PasswordReset, Review, Revision, Study, Team, TeamSetting, User };
 export type { Role } from './membership';
 export type { CommentAnchor } from './comment';
 export type { ReviewDecision } from './review';

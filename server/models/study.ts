@@ -1,4 +1,5 @@
 import { DataTypes, Model, type CreationOptional, type ForeignKey, type InferAttributes, type InferCreationAttributes, type NonAttribute, type Sequelize } from 'sequelize';
+import type { DefaultSections } from '../../src/core/study';
 import { STUDY_STATUSES, type StudyStatus } from '../../src/validation/studies';
 import type { Team } from './team';
 import type { User } from './user';
@@ -12,6 +13,8 @@ export class Study extends Model<InferAttributes<Study>, InferCreationAttributes
   declare status: CreationOptional<StudyStatus>;
   /** The study document (docs/study-format.md), stored as JSON text. */
   declare document: CreationOptional<Record<string, unknown> | null>;
+  /** The team defaults the study was started with (`defaultSections`), null for studies started from a file or a copy without. */
+  declare teamDefaults: CreationOptional<DefaultSections | null>;
   /** Bumped on every save; a save names the version it started from. */
   declare version: CreationOptional<number>;
   declare createdAt: CreationOptional<Date>;
@@ -32,6 +35,7 @@ export class Study extends Model<InferAttributes<Study>, InferCreationAttributes
           validate: { isIn: [STUDY_STATUSES as unknown as string[]] },
         },
         document: { type: DataTypes.JSON, allowNull: true },
+        teamDefaults: { type: DataTypes.JSON, allowNull: true, field: 'team_defaults' },
         version: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 1 },
         createdAt: { type: DataTypes.DATE, field: 'created_at' },
         updatedAt: { type: DataTypes.DATE, field: 'updated_at' },

@@ -1,5 +1,6 @@
 import { Router, type NextFunction, type Request, type Response } from 'express';
 import { invitationSchema, roleChangeSchema } from '../../src/validation/team';
+import { teamSettingsSchema } from '../../src/validation/team-settings';
 import type { Deps } from '../deps';
 import { authOf, requireAuth } from '../middleware/auth';
 import type { Role } from '../models';
@@ -7,6 +8,7 @@ import { listEvents } from '../services/audit-service';
 import { invite, listInvitations, revokeInvitation } from '../services/invitation-service';
 import { membershipIn, requireRole } from '../services/permissions';
 import { changeRole, listMembers, removeMember } from '../services/team-service';
+import { getTeamSettings, updateTeamSettings } from '../services/team-settings-service';
 import { validateBody } from '../validate';
 import { idParam } from './params';
 
@@ -50,6 +52,15 @@ export function teamsRouter(deps: Deps) {
   router.delete('/:teamId/invitations/:invitationId', loadTeam, async (req, res) => {
     await revokeInvitation(deps, authOf(res), teamOf(res), idParam(req.params.invitationId as string));
     res.status(204).end();
+  });
+
+  // Defaults for new studies: every member reads them, owners change them
+  router.get('/:teamId/settings', loadTeam, async (_req, res) => {
+    res.json(await getTeamSettings(db, authOf(res), teamOf(res)));
+  });
+  router.put('/:teamId/settings', loadTeam, async (req, res) => {
+    requireRole(membershipIn(authOf(res), teamOf(res)), ['owner'], 'Only owners change the team settings');
+    res.json(await updateTeamSettings(db, authOf(res), teamOf(res), validateBody(teamSettingsSchema, req.body)));
   });
 
   // Activity

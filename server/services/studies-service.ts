@@ -1,4 +1,5 @@
 import { Op, type Transaction } from 'sequelize';
+import type { DefaultSections } from '../../src/core/study';
 import type { StudyCreateInput, StudySaveInput } from '../../src/validation/studies';
 import type { Db } from '../db';
 import { AppError } from '../errors';
@@ -7,6 +8,7 @@ import { recordEvent } from './audit-service';
 import type { MembershipView, SessionView } from './auth-service';
 import { requireStudyEditor } from './permissions';
 import { checkDocument } from './study-document';
+import { defaultsForNewStudy } from './team-settings-service';
 
 export const EDITOR_ROLES: readonly Role[] = ['owner', 'designer'];
 
@@ -23,7 +25,8 @@ export type StudySummary = {
   updatedAt: string;
 };
 export type Approval = { revision: number; reviewer: { id: number; name: string } | null; at: string };
-export type StudyView = StudySummary & { document: Record<string, unknown> | null; approval: Approval | null };
+/** `teamDefaults`: what the study took from its team's defaults when it was started (its editor starts from them). */
+export type StudyView = StudySummary & { document: Record<string, unknown> | null; approval: Approval | null; teamDefaults: DefaultSections | null };
 
 const include = [
   { association: 'author', attributes: ['id', 'name'] },
@@ -62,7 +65,7 @@ async function currentApproval(db: Db, s: Study): Promise<Approval | null> {
 }
 
 export async function studyView(db: Db, s: Study): Promise<StudyView> {
-  return { ...summary(s), document: s.document ?? null, approval: await currentApproval(db, s) };
+  return { ...summary(s), document: s.document ?? null, approval: await currentApproval(db, s), teamDefaults: s.teamDefaults ?? null };
 }
 
 export async function listStudies(db: Db, memberships: MembershipView[]): Promise<StudySummary[]> {
@@ -101,11 +104,11 @@ export function teamForNewStudy(memberships: MembershipView[], teamId?: number):
   return m;
 }
 
-type NewStudy = { teamId: number; authorId: number; title: string; description: string; document: Record<string, unknown> | null };
+type NewStudy = { teamId: number; authorId: number; title: string; description: string; document: Record<string, unknown> | null; teamDefaults?: DefaultSections | null };
 
 /** Inserts a study and its first revision. */
 export async function insertStudy(db: Db, s: NewStudy, transaction: Transaction): Promise<Study> {
-  const study = await db.models.Study.create({ ...s, version: 1 }, { transaction });
+  const study = await db.models.Study.create({ ...s, teamDefaults: s.teamDefaults ?? null, version: 1 }, { transaction });
   await db.models.Revision.create(
     { studyId: study.id, number: 1, authorId: s.authorId, title: s.title, description: s.description, document: s.document },
     { transaction },
@@ -117,6 +120,8 @@ export async function createStudy(db: Db, auth: SessionView, input: StudyCreateI
   const team = teamForNewStudy(auth.memberships, input.teamId);
   if (input.document) checkDocument(input.document);
   const id = await db.sequelize.transaction(async (transaction) => {
+    // A study started empty takes the team's defaults as they are now; a file's document is kept as it is.
+    const teamDefaults = input.document ? null : await defaultsForNewStudy(db, team.teamId, transaction);
     const study = await insertStudy(
       db,
       {
@@ -125,6 +130,7 @@ export async function createStudy(db: Db, auth: SessionView, input: StudyCreateI
         title: input.title,
         description: input.description ?? '',
         document: (input.document as Record<string, unknown> | undefined) ?? null,
+        teamDefaults,
       },
       transaction,
     );
@@ -187,7 +193,7 @@ export async function duplicateStudy(db: Db, auth: SessionView, study: Study): P
   const m = teamForNewStudy(auth.memberships, study.teamId);
   const title = `${study.title} (copy)`.slice(0, 200);
   const id = await db.sequelize.transaction(async (transaction) => {
-    const copy = await insertStudy(db, { teamId: m.teamId, authorId: auth.user.id, title, description: study.description, document: study.document }, transaction);
+    const copy = await insertStudy(db, { teamId: m.teamId, authorId: auth.user.id, title, description: study.description, document: study.document, teamDefaults: study.teamDefaults }, transaction);
     await recordEvent(db, { teamId: m.teamId, actorId: auth.user.id, action: 'study.duplicated', subjectType: 'study', subjectId: copy.id, details: { from: study.id } }, transaction);
     return copy.id;
   });
