@@ -30,6 +30,9 @@ export const LANCZOS_BREAKDOWN_REL_TOL = 1e-13;
 /** Slots (a power of two) of runProfile's caches of x∞ per input vector and e^(−λh) per duration. */
 export const PROFILE_CACHE_SIZE = 64;
 
+/** Segments per block of runProfile's peaks-only loop (runSegmentsInBlocks). */
+export const PROFILE_BLOCK_SIZE = 256;
+
 /** Modal rates within this fraction of their cluster's slowest are bounded together. */
 export const BOUND_CLUSTER_REL = 0.01;
 

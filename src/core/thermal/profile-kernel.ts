@@ -151,7 +151,7 @@ export function runSegments(
  * cluster of near-equal rates through its slowest one) exceeds it and bounds of f′ do not
  * prove f monotone.
  */
-function mayPeakInside(
+export function mayPeakInside(
   rates: Float64Array,
   watchRows: Float64Array,
   base: number,

@@ -2,6 +2,7 @@ import { checkIndex, checkVector } from './check-input';
 import { checkProfile } from './check-profile';
 import { clusterModes } from './mode-clusters';
 import { modalFromTemperatures, temperaturesFromModal } from './modal-state';
+import { runSegmentsInBlocks } from './profile-blocks';
 import { runSegments } from './profile-kernel';
 import { periodicModes } from './periodic-start';
 import type { ModalModel, Peak, Profile, RunOptions, RunResult } from './types';
@@ -9,12 +10,15 @@ import type { ModalModel, Peak, Profile, RunOptions, RunResult } from './types';
 /**
  * Runs a long piecewise-constant profile in modal coordinates (exact, PHYSICS.md §3).
  *
- * Per segment and mode: the update x ← x∞ + e^(−λh)(x − x∞); x∞ = F u and e^(−λh) come
- * from a small cache of recent inputs and durations (PROFILE_CACHE_SIZE), so repeating
- * patterns cost no exp. Per watched node, cheap upper bounds of f on [0, h] (termwise
- * first, then each cluster of near-equal rates through its slowest one, see clusterModes)
- * skip segments that cannot raise the peak, and modal terms of one sign prove f monotone;
- * the exact interior search (interiorPeak) runs only when a peak could hide inside.
+ * Per segment and mode: the update x ← x∞ + e^(−λh)(x − x∞), with x∞ = F u. A peaks-only
+ * run goes a block of segments at a time, each mode through the whole block in turn
+ * (runSegmentsInBlocks); a run that records boundaries goes segment by segment with a small
+ * cache of recent inputs and durations (runSegments, PROFILE_CACHE_SIZE). Both take e^(−λh)
+ * of slow modes and of near-equal rates from a short Taylor polynomial (expSmall). Per
+ * watched node, cheap upper bounds of f on [0, h] (termwise first, then each cluster of
+ * near-equal rates through its slowest one, see clusterModes) skip segments that cannot
+ * raise the peak, and modal terms of one sign prove f monotone; the exact interior search
+ * (interiorPeak) runs only when a peak could hide inside.
  * Memory is fixed unless recordBoundaries is set.
  *
  * Peaks are exact maxima over the whole profile (earliest time on a tie; s from its start).
@@ -61,21 +65,26 @@ export function runProfile(model: ModalModel, profile: Profile, options: RunOpti
   const peakValue = new Float64Array(nw).fill(-Infinity);
   const peakTime = new Float64Array(nw);
   const state: BoundaryState = { model, x, inputs, boundaries, boundaryTimes };
-  runSegments(
-    toFloat64(durations),
-    toFloat64(inputs),
-    model.rates,
-    columns,
-    watchRows,
-    watchSteady,
-    x,
-    peakValue,
-    peakTime,
-    model.scratch.sum,
-    clusterModes(model.rates),
-    q,
-    record ? (s: number, t: number) => recordBoundary(state, s, t) : null,
-  );
+  const clusters = clusterModes(model.rates);
+  if (record) {
+    runSegments(
+      toFloat64(durations),
+      toFloat64(inputs),
+      model.rates,
+      columns,
+      watchRows,
+      watchSteady,
+      x,
+      peakValue,
+      peakTime,
+      model.scratch.sum,
+      clusters,
+      q,
+      (s: number, t: number) => recordBoundary(state, s, t),
+    );
+  } else {
+    runSegmentsInBlocks(toFloat64(durations), toFloat64(inputs), model.rates, columns, watchRows, watchSteady, x, peakValue, peakTime, model.scratch.sum, clusters, q);
+  }
 
   const peaks: Peak[] = [];
   for (let w = 0; w < nw; w++) {
