@@ -7,9 +7,10 @@ type Doc = { ambient: { temperatureC: number }; profile: { segments: { iloadA?: 
 type ApiStudy = { id: number; title: string; version: number; document: Doc };
 
 const BENCH_LOAD = /bench electronic load/i;
+const LAB_SUPPLY = /laboratory supply/i;
 
-async function api<T>(page: Page, method: 'get' | 'post' | 'delete', path: string): Promise<T> {
-  const response = await page.request[method](`${baseUrl()}/api${path}`, { headers: { Origin: baseUrl() } });
+async function api<T>(page: Page, method: 'get' | 'post' | 'delete', path: string, data?: unknown): Promise<T> {
+  const response = await page.request[method](`${baseUrl()}/api${path}`, { headers: { Origin: baseUrl() }, data });
   if (!response.ok()) throw new Error(`${method.toUpperCase()} /api${path} answered ${response.status()}`);
   return (response.status() === 204 ? undefined : await response.json()) as T;
 }
@@ -91,6 +92,49 @@ describe('the study editor in the browser', () => {
     expect(await designer.getByTestId('live-results').count()).toBe(0);
     await screenshotWhole(designer, PHONE, 'editor');
     await designer.setViewportSize(DESKTOP);
+  });
+
+  it('edits a rail tap and an SOA value and sees the verdict and the SOA check follow the server’s solve', async () => {
+    const demo = (await apiStudies(designer)).find((s) => LAB_SUPPLY.test(s.title));
+    const lab = (await api<{ study: ApiStudy & { document: Record<string, unknown> } }>(designer, 'post', `/studies/${demo!.id}/duplicate`)).study;
+    try {
+      await designer.setViewportSize(DESKTOP);
+      await designer.goto(`${baseUrl()}/studies/${lab.id}/edit`);
+      const verdict = designer.getByTestId('study-verdict');
+      await verdict.waitFor({ timeout: 60_000 });
+      const first = await verdict.innerText();
+      await screenshotWhole(designer, DESKTOP, 'editor-rails-soa');
+
+      // The reference: the server solving the same edited document (POST /api/solve).
+      type Plan = { taps: { circuit: Record<string, unknown> }[] };
+      const doc = JSON.parse(JSON.stringify(lab.document)) as { railPlan: Plan; devices: { soa: Record<string, unknown> }[] };
+      doc.railPlan.taps[1].circuit.diodeV = 2;
+      const tapEdit = (await api<{ result: { worst: { marginToTargetK: number }; soaPasses: boolean } }>(designer, 'post', '/solve', { document: doc })).result;
+      await designer.getByLabel('adapters in series diode drop (V)').fill('2 V');
+      await designer.waitForFunction((text) => (document.querySelector('[data-testid="study-verdict"]') as HTMLElement | null)?.innerText !== text, first, { timeout: 60_000 });
+      await designer.getByTestId('results-updating').waitFor({ state: 'detached', timeout: 60_000 });
+      const afterTap = await verdict.innerText();
+      // The verdict shows the margin to three significant digits.
+      expect(Math.abs(Number(/Passes: ([\d.]+)\sK/.exec(afterTap)?.[1]) - tapEdit.worst.marginToTargetK)).toBeLessThan(0.1);
+
+      doc.devices[0].soa.icMaxA = 1;
+      const soaEdit = (await api<{ result: { soaPasses: boolean } }>(designer, 'post', '/solve', { document: doc })).result;
+      expect(soaEdit.soaPasses).toBe(false);
+      await designer.getByLabel('Q1 Ic,max (A)').fill('1 A');
+      await designer.getByTestId('study-verdict').getByText('SOA check fails for Q1', { exact: false }).waitFor({ timeout: 60_000 });
+      await designer.getByTestId('soa-device-Q1').waitFor();
+      await screenshotWhole(designer, DESKTOP, 'editor-rails-soa-edited');
+
+      await designer.setViewportSize(PHONE);
+      await designer.goto(`${baseUrl()}/studies/${lab.id}/edit`);
+      await designer.getByRole('button', { name: /^Rail plan/ }).click();
+      await designer.getByRole('button', { name: /^Pass elements/ }).click();
+      await designer.getByLabel('adapters in series diode drop (V)').waitFor();
+      await screenshotWhole(designer, PHONE, 'editor-rails-soa');
+      await designer.setViewportSize(DESKTOP);
+    } finally {
+      await api(designer, 'delete', `/studies/${lab.id}`).catch(() => undefined);
+    }
   });
 
   it('gives a reviewer no Edit action', async () => {

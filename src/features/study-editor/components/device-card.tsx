@@ -6,11 +6,10 @@ import { color, radius, spacing } from '@/constants/theme';
 
 import { useLibraryParts } from '../api';
 import { deviceFromPart, type LibraryPart } from '../catalogue-copy';
-import { useEditorActions, useErrorsUnder, useFieldError } from '../editor-context';
+import { useEditorActions, useFieldError } from '../editor-context';
 import { at } from '../field-path';
 import { removeDevice, renameDevice } from '../id-refs';
 import { moveItem, nextId } from '../list-edits';
-import { soaLines } from '../soa-summary';
 import type { RawDevice, RawDocument } from '../types';
 import { ChoiceRow } from './choice-row';
 import { ElectricalFields } from './electrical-fields';
@@ -19,6 +18,7 @@ import { LibraryPicker } from './library-picker';
 import { PackageFields } from './package-fields';
 import { QuantityField } from './quantity-field';
 import { RowActions } from './row-actions';
+import { SoaFields } from './soa-fields';
 import { TextEntry } from './text-entry';
 
 const KINDS = [
@@ -46,7 +46,6 @@ export const DeviceCard = memo(function DeviceCard({ device, index, count, sinkI
   const field = at('document.devices', index);
   const owner = device.id || `device ${index + 1}`;
   const sinkError = useFieldError(at(field, 'sink'));
-  const soaErrors = useErrorsUnder(at(field, 'soa'));
   const updateDoc = (change: (doc: RawDocument) => RawDocument) => update<RawDocument>('document', change);
 
   return (
@@ -135,23 +134,7 @@ export const DeviceCard = memo(function DeviceCard({ device, index, count, sinkI
         <ElectricalFields field={at(field, 'electrical')} electrical={device.electrical} owner={owner} />
       </Group>
       <Group title="Safe operating area">
-        {device.soa ? (
-          <>
-            {soaLines(device.soa).map((line) => (
-              <Text key={line} variant="caption" tone="muted">
-                {line}
-              </Text>
-            ))}
-            <Button label="Remove SOA model" variant="ghost" accessibilityLabel={`Remove ${owner} SOA model`} onPress={() => set(at(field, 'soa'), undefined)} style={styles.button} />
-          </>
-        ) : (
-          <Text tone="muted">No SOA model. Copy a part with one from the parts library to check every operating point against it.</Text>
-        )}
-        {soaErrors.map((e) => (
-          <Text key={e.field} variant="caption" tone="danger" role="alert">
-            {e.field.replace(`${field}.`, '')}: {e.reason}
-          </Text>
-        ))}
+        <SoaFields field={at(field, 'soa')} device={device} owner={owner} />
       </Group>
     </View>
   );

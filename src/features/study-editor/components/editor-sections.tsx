@@ -7,6 +7,7 @@ import type { Problem } from '../check-document';
 import { SECTION_ORDER, SECTION_TITLES, sectionOf, type SectionKey } from '../field-path';
 import { profileSteps } from '../profile-steps';
 import type { EditorValues } from '../types';
+import { railPlanSummary, type RawRailPlan } from '../rail-plan-edits';
 import { formatDuration } from '@/features/studies/quantity-format';
 import { AmbientSection } from './ambient-section';
 import { DevicesSection } from './devices-section';
@@ -39,7 +40,7 @@ function summaryOf(key: SectionKey, values: EditorValues): string {
     case 'ambient':
       return doc.ambient?.profile ? `${plural(doc.ambient.profile.length, 'point', 'points')} over time` : typeof doc.ambient?.temperatureC === 'number' ? `${doc.ambient.temperatureC} °C` : '—';
     case 'rails':
-      return doc.railPlan ? 'Tap selection from the rail plan' : 'None';
+      return doc.railPlan ? railPlanSummary(doc.railPlan as RawRailPlan) : 'None';
     case 'site':
       return siteLifeSummary(doc);
     case 'profile': {
@@ -64,7 +65,7 @@ export const EditorSections = memo(function EditorSections({ values, problems, o
       case 'ambient':
         return <AmbientSection ambient={doc.ambient} />;
       case 'rails':
-        return <RailPlanSection plan={doc.railPlan} />;
+        return <RailPlanSection plan={doc.railPlan as RawRailPlan | undefined} deviceIds={deviceIds} />;
       case 'site':
         return <SiteLifeSection document={doc} />;
       case 'profile':

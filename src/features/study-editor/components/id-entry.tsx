@@ -5,10 +5,10 @@ import { TextField } from '@/components/ui';
 
 import { useFieldError, useRegisterField } from '../editor-context';
 
-export type IdEntryProps = { field: string; value: unknown; label: string; fullLabel: string; onChange: (id: string) => void };
+export type IdEntryProps = { field: string; value: unknown; label: string; fullLabel: string; onChange: (id: string) => void; hint?: string };
 
 /** An id that other fields refer to: the parent renames the references along with it. */
-export const IdEntry = memo(function IdEntry({ field, value, label, fullLabel, onChange }: IdEntryProps) {
+export const IdEntry = memo(function IdEntry({ field, value, label, fullLabel, onChange, hint = 'Letters, digits, _ or -; names the chart series and CSV columns.' }: IdEntryProps) {
   useRegisterField(field, fullLabel);
   const error = useFieldError(field);
   return (
@@ -19,7 +19,7 @@ export const IdEntry = memo(function IdEntry({ field, value, label, fullLabel, o
         value={typeof value === 'string' ? value : ''}
         onChangeText={onChange}
         error={error}
-        hint="Letters, digits, _ or -; names the chart series and CSV columns."
+        hint={hint}
         autoCapitalize="none"
         autoCorrect={false}
       />
