@@ -1,3 +1,6 @@
+import fs from 'node:fs';
+import path from 'node:path';
+
 import { evaluateStudy, parseStudy } from '@/core/study';
 import {
   evaluateNominal,
@@ -106,6 +109,21 @@ describe('tolerance corners', () => {
     full.peaks.forEach((exact, i) => {
       assertInDelta(fast.peaks[i], exact, 1e-4, `run ${Math.floor(i / 2)}`);
     });
+  });
+
+  it('selects the rail taps again with the line in each run, the same through the scan as through the pipeline', () => {
+    // The lab-supply demo with a constant ambient and no convection or shutdown, so the scan applies.
+    const raw = JSON.parse(fs.readFileSync(path.resolve(__dirname, '../../../examples/lab-supply-two-tap.json'), 'utf8'));
+    raw.ambient = { temperatureC: 35 };
+    raw.profile.repeat = 1;
+    raw.profile.periodic = false;
+    for (const s of raw.sinks) delete s.naturalConvection;
+    for (const d of raw.devices) delete d.electrical?.thermalShutdown;
+    const plan = planTolerance(parseStudy(raw), { ...NONE, mode: 'monte-carlo', linePct: 10, loadPct: 5, rthSaPct: 10, runs: 12, seed: 3 });
+    expect(plan.fast).toBe(true);
+    const fast = evaluateRuns(plan, 0, 12);
+    const full = evaluateRuns({ ...plan, fast: false }, 0, 12);
+    full.peaks.forEach((exact, i) => assertInDelta(fast.peaks[i], exact, 1e-4, `run ${i}`));
   });
 
   it('gives the exact main effect of each resistance in the linear steady case', () => {

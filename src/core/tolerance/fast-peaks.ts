@@ -9,14 +9,17 @@ import { createStudyModel } from '../study/study-model';
 /**
  * Whether a study's runs can take the peak scan: linear (no thermal shutdown, no natural
  * convection), a constant ambient, and a profile that is either run as written or, periodic,
- * one pass repeated forever. Otherwise every run goes through the full pipeline.
+ * one pass repeated forever (with a rail plan: one pass, not periodic). Otherwise every run
+ * goes through the full pipeline.
  */
 export function fastPathApplies(doc: StudyDocument): boolean {
   return (
     doc.ambient.kind === 'constant' &&
     !doc.devices.some((d) => d.electrical?.thermalShutdown) &&
     !doc.sinks.some((s) => s.naturalConvection) &&
-    (!doc.profile.periodic || doc.profile.repeat === 1)
+    (!doc.profile.periodic || doc.profile.repeat === 1) &&
+    // Tap selection carries its state across passes: a rail plan takes the scan for one pass only.
+    (!doc.railPlan || (doc.profile.repeat === 1 && !doc.profile.periodic))
   );
 }
 
