@@ -57,7 +57,8 @@ export async function rankStudy(db: Db, study: Study, query: RankingQuery) {
   if (query.sortBy !== undefined && !(SORT_KEYS as readonly string[]).includes(query.sortBy)) {
     throw AppError.badRequest(`sort: must be one of ${SORT_KEYS.join(', ')}`, [{ path: 'sort', message: `must be one of ${SORT_KEYS.join(', ')}` }]);
   }
-  const rows = await db.models.Heatsink.findAll({ where: { teamId: study.teamId } });
+  // Ordered, so sinks that tie rank the same way on every database (PostgreSQL has no implicit row order).
+  const rows = await db.models.Heatsink.findAll({ where: { teamId: study.teamId }, order: [['id', 'ASC']] });
   try {
     const { setup, options, notes } = rankingSetupFromStudy(doc, sinkId, segmentPowers(doc));
     const merged: RankingOptions = {

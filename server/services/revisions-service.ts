@@ -17,7 +17,7 @@ export async function listRevisions(db: Db, study: Study) {
     include: [{ association: 'author', attributes: ['id', 'name'] }],
     order: [['number', 'ASC']],
   });
-  const reviews = await db.models.Review.findAll({ where: { studyId: study.id }, include: [{ association: 'reviewer', attributes: ['id', 'name'] }] });
+  const reviews = await db.models.Review.findAll({ where: { studyId: study.id }, include: [{ association: 'reviewer', attributes: ['id', 'name'] }], order: [['id', 'ASC']] });
   const out = rows.map((r, i) => {
     const changes = i === 0 ? [] : diffDocuments(comparable(rows[i - 1]), comparable(r));
     return {

@@ -22,7 +22,11 @@ export function checkDocument(document: unknown, prefix = 'document'): StudyDocu
 }
 
 const CACHE_SIZE = 200;
-/** Results by document content: a result depends on nothing else, and solving can take a while. */
+/**
+ * Results by document content: a result depends on nothing else, and solving can take a while.
+ * Each server process keeps its own; being keyed by content it is never stale, so processes
+ * behind a load balancer need not share it.
+ */
 const cache = new Map<string, StudyResult>();
 
 /** Parses and solves; solver refusals (too large, no path to ambient) are the client's 400 too. */
