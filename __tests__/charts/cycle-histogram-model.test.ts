@@ -1,5 +1,6 @@
 import { countDomain, cycleBars, shareText } from '@/charts/cycle-histogram-model';
 import { evaluateStudy, parseStudy } from '@/core/study';
+import { cyclesText, lifeText } from '@/features/results/lifetime-text';
 import { singleRcStudy } from '../core/study/study-fixtures';
 
 describe('cycle histogram model', () => {
@@ -28,5 +29,17 @@ describe('cycle histogram model', () => {
     expect(bars[0].fromK).toBeLessThanOrEqual(swing);
     expect(bars[0].toK).toBeGreaterThan(swing);
     expect(bars[0]).toMatchObject({ count: 1, damageShare: 1 });
+  });
+});
+
+describe('lifetime wording', () => {
+  it('gives a life to two significant digits in years, months or days', () => {
+    expect(lifeText(51.317)).toBe('51 years');
+    expect(lifeText(1.04)).toBe('1 year');
+    expect(lifeText(0.5876)).toBe('7.1 months');
+    expect(lifeText(0.5)).toBe('6 months');
+    expect(lifeText(0.01)).toBe('3.7 days');
+    expect(lifeText(null)).toBe('no damaging temperature cycles');
+    expect(cyclesText(2498743.5)).toBe('2,500,000');
   });
 });

@@ -1,13 +1,21 @@
 import type { CycleClass, DeviceLifetime, LifetimeResult, SiteResult, SinkTouchResult, TouchResult } from '@/core/study';
 import { formatNumber, formatQuantity } from '@/features/studies/quantity-format';
 
-/** Life in the unit a reader would use: "51 years", "8 months", "12 days"; null: no damaging cycle. */
+/** Two significant digits: a life estimate is not known better than that. */
+const rough = (v: number) => Number(v.toPrecision(2)).toLocaleString('en');
+
+/** Life in the unit a reader would use: "51 years", "7 months", "12 days"; null: no damaging cycle. */
 export function lifeText(years: number | null): string {
   if (years === null) return 'no damaging temperature cycles';
-  if (years >= 1) return `${formatNumber(years)} year${years === 1 ? '' : 's'}`;
+  if (years >= 1) return `${rough(years)} year${rough(years) === '1' ? '' : 's'}`;
   const months = years * 12;
-  if (months >= 1) return `${formatNumber(months)} months`;
-  return `${formatNumber(years * 365.25)} days`;
+  if (months >= 1) return `${rough(months)} month${rough(months) === '1' ? '' : 's'}`;
+  return `${rough(years * 365.25)} days`;
+}
+
+/** A cycle count with thousands grouped: "2,500,000". */
+export function cyclesText(n: number): string {
+  return Number(n.toPrecision(3)).toLocaleString('en');
 }
 
 /** "8 h a day (2,880 repeats of the 10 s period)". */
@@ -59,5 +67,5 @@ export function touchVerdictText(s: SinkTouchResult): string {
 export function touchSummary(touch: TouchResult): string | null {
   const failed = Object.values(touch.sinks).filter((s) => !s.passed);
   if (failed.length === 0) return null;
-  return `Too hot to touch: ${failed.map((s) => `${s.sink} reaches ${formatQuantity(s.peakC, '°C')} (limit ${formatQuantity(s.limitC, '°C')})`).join(', ')}.`;
+  return `${failed.map((s) => `${s.sink} reaches ${formatQuantity(s.peakC, '°C')} (limit ${formatQuantity(s.limitC, '°C')})`).join(', ')}.`;
 }

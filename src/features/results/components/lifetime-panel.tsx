@@ -7,7 +7,7 @@ import type { CycleClass, DeviceLifetime, LifetimeResult, SinkTouchResult, SiteR
 import { spacing } from '@/constants/theme';
 import { formatNumber, formatQuantity } from '@/features/studies/quantity-format';
 
-import { cycleClassText, deviceLifeSentence, lifeText, missionText, modelText, siteText, touchRuleText, touchSummary, touchVerdictText } from '../lifetime-text';
+import { cycleClassText, cyclesText, deviceLifeSentence, lifeText, missionText, modelText, siteText, touchRuleText, touchSummary, touchVerdictText } from '../lifetime-text';
 import { ResultTable, type ResultColumn } from './result-table';
 import { TwoColumns } from './two-columns';
 import { WarningBox } from './warning-box';
@@ -15,7 +15,7 @@ import { WarningBox } from './warning-box';
 const CYCLE_COLUMNS: readonly ResultColumn<CycleClass>[] = [
   { label: 'Cycle', cell: (c) => ({ text: cycleClassText(c) }) },
   { label: 'Per repeat', cell: (c) => ({ text: formatNumber(c.count) }) },
-  { label: 'Cycles to failure', cell: (c) => ({ text: formatNumber(c.cyclesToFailure) }) },
+  { label: 'Cycles to failure', cell: (c) => ({ text: cyclesText(c.cyclesToFailure) }) },
   { label: 'Share of damage', cell: (c) => ({ text: shareText(c.damageShare) }) },
 ];
 
