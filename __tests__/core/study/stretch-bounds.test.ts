@@ -31,4 +31,33 @@ describe('stretch bounds', () => {
       }
     }
   });
+
+  it('settle the maximum to the tolerance on the hot side, never below the exact peak', () => {
+    // Reference: the thermal core's exact peak search (roots of the derivative, PHYSICS.md §3) and dense sampling of the exact solution.
+    const rand = seededRandom(11);
+    const nodes = Array.from({ length: 6 }, (_, i) => ({ id: `n${i}`, capacityJPerK: i === 2 ? 0 : 0.01 + 10 * rand() }));
+    const links = nodes.map((n, i) => ({ a: n.id, b: i + 1 < nodes.length ? nodes[i + 1].id : AMBIENT, rKPerW: 0.05 + rand() }));
+    const model = compileNetwork({ nodes, links, heatInputs: ['n0', 'n4'] });
+    const bounds = createStretchBounds(model);
+    let settled = 0;
+    for (let trial = 0; trial < 60; trial++) {
+      const T = Float64Array.from(nodes, () => 20 + 100 * rand());
+      const u = [50 * rand(), 30 * rand(), 25];
+      const h = Math.pow(10, -3 + 5 * rand());
+      bounds.load(T, u, h);
+      for (let k = 0; k < nodes.length; k++) {
+        for (const tol of [1e-3, 1e-6]) {
+          const hot = bounds.maxWithin(k, tol);
+          if (Number.isNaN(hot)) continue;
+          settled++;
+          const peak = peakInSegment(model, T, u, h, k).valueC;
+          expect(hot).toBeGreaterThanOrEqual(peak - 1e-9);
+          expect(hot).toBeLessThanOrEqual(peak + tol + 1e-9);
+          for (let s = 0; s <= 40; s++) expect(hot).toBeGreaterThanOrEqual(advance(model, T, u, (h * s) / 40)[k] - 1e-9);
+        }
+      }
+    }
+    // Most stretches settle without the exact search (the point of the method).
+    expect(settled).toBeGreaterThan(0.9 * 60 * 6 * 2);
+  });
 });

@@ -56,7 +56,10 @@ export function createSoaTracker(sm: StudyModel): SoaTracker | null {
       loaded = true;
       const upper = bounds.upper(node);
       if (upper <= atLeast) return atLeast;
-      const best = upper - bounds.endMax(node) <= SOA_CASE_TOL_K ? upper : peakInSegment(model, T, u, h, node).valueC;
+      if (upper - bounds.endMax(node) <= SOA_CASE_TOL_K) return Math.max(atLeast, upper);
+      // Bounds over halved sub-stretches settle most stretches to the tolerance at a fraction of the exact search's cost.
+      const within = bounds.maxWithin(node, SOA_CASE_TOL_K);
+      const best = Number.isNaN(within) ? peakInSegment(model, T, u, h, node).valueC : within;
       return Math.max(atLeast, best);
     };
     devices.forEach((d, k) => {

@@ -13,7 +13,16 @@ export type StretchBounds = {
   lower(node: number): number;
   /** The larger of the node's values at the two ends of the stretch (a lower bound of its maximum). */
   endMax(node: number): number;
+  /**
+   * The node's maximum over the stretch to within tolK on the hot side (never below it), by
+   * branch and bound on the same bounds over halved sub-stretches; NaN when that would take
+   * more than MAX_BOUND_STEPS steps (the exact search must run).
+   */
+  maxWithin(node: number, tolK: number): number;
 };
+
+/** Sub-stretches maxWithin may bound before it gives up. */
+const MAX_BOUND_STEPS = 256;
 
 export function createStretchBounds(model: ModalModel): StretchBounds {
   const { modeCount: n, nodeCount: N, inputCount: q, rates } = model;
@@ -25,9 +34,11 @@ export function createStretchBounds(model: ModalModel): StretchBounds {
   const xInf = new Float64Array(n);
   const decay = new Float64Array(n);
   let uRef: ArrayLike<number> = [];
+  let hRef = 0;
 
   function load(T: ArrayLike<number>, u: ArrayLike<number>, h: number): void {
     uRef = u;
+    hRef = h;
     for (let i = 0; i < n; i++) {
       let x = 0;
       for (let j = 0; j < N; j++) x += P[i * N + j] * T[j];
@@ -66,5 +77,82 @@ export function createStretchBounds(model: ModalModel): StretchBounds {
     return v + Math.max(start, end);
   }
 
-  return { load, upper: (node) => bound(node, 1), lower: (node) => bound(node, -1), endMax };
+  const coef = new Float64Array(n);
+  const stack = new Float64Array(2 * (MAX_BOUND_STEPS + 2));
+
+  /**
+   * Over [t0, t1] each term a_i e^(−λ_i τ) lies between its end values, so their larger ends
+   * bound T there; the values at the ends are reached. An interval whose bound lies within
+   * tolK of the best value reached is settled at its bound; the others are halved.
+   */
+  function maxWithin(node: number, tolK: number): number {
+    let v = 0;
+    for (let j = 0; j < q; j++) v += D[node * q + j] * uRef[j];
+    for (let i = 0; i < n; i++) {
+      const w = W[node * n + i];
+      v += w * xInf[i];
+      coef[i] = w * dx[i];
+    }
+    const at = (t: number) => {
+      let s = v;
+      for (let i = 0; i < n; i++) s += coef[i] * Math.exp(-rates[i] * t);
+      return s;
+    };
+    /**
+     * Two bounds, the smaller kept: the terms' larger ends, and the slopes. T' is a sum of
+     * monotone terms too, so its extremes on [t0, t1] lie between smin and smax; T then lies
+     * below both lines T(t0) + smax (t − t0) and T(t1) − smin (t1 − t), whose lower envelope
+     * peaks at an end or where they cross.
+     */
+    const boundOver = (t0: number, t1: number) => {
+      let s = v;
+      let f0 = v;
+      let f1 = v;
+      let smax = 0;
+      let smin = 0;
+      for (let i = 0; i < n; i++) {
+        const a = coef[i] * Math.exp(-rates[i] * t0);
+        const b = coef[i] * Math.exp(-rates[i] * t1);
+        f0 += a;
+        f1 += b;
+        s += a > b ? a : b;
+        const da = -rates[i] * a;
+        const db = -rates[i] * b;
+        smax += da > db ? da : db;
+        smin += da > db ? db : da;
+      }
+      const len = t1 - t0;
+      let slopes = Math.max(Math.min(f0, f1 - smin * len), Math.min(f0 + smax * len, f1));
+      if (smax > smin) {
+        const cross = (f1 - smin * len - f0) / (smax - smin);
+        if (cross > 0 && cross < len) slopes = Math.max(slopes, f0 + smax * cross);
+      }
+      return s < slopes ? s : slopes;
+    };
+    let best = Math.max(at(0), at(hRef));
+    let settled = -Infinity;
+    let top = 0;
+    stack[top++] = 0;
+    stack[top++] = hRef;
+    for (let steps = 0; top > 0; steps++) {
+      if (steps > MAX_BOUND_STEPS || top + 4 > stack.length) return NaN;
+      const t1 = stack[--top];
+      const t0 = stack[--top];
+      const u = boundOver(t0, t1);
+      if (u <= best + tolK) {
+        if (u > settled) settled = u;
+        continue;
+      }
+      const mid = 0.5 * (t0 + t1);
+      const m = at(mid);
+      if (m > best) best = m;
+      stack[top++] = t0;
+      stack[top++] = mid;
+      stack[top++] = mid;
+      stack[top++] = t1;
+    }
+    return Math.max(best, settled);
+  }
+
+  return { load, upper: (node) => bound(node, 1), lower: (node) => bound(node, -1), endMax, maxWithin };
 }
