@@ -17,6 +17,9 @@ import { createTestDatabase, makeStudy, makeTeam, makeUser, TEST_DIALECT, type T
  * (SQLite), so nothing in one process orders the other's writes. Runs on the dialect the
  * server tests run on (SQLite, or PostgreSQL with TEST_DATABASE_URL).
  */
+// Racing writers on a shared, busy machine wait on each other's locks: far beyond jest's 5 s.
+jest.setTimeout(60_000);
+
 let database: TestDatabase;
 let dbs: [Db, Db];
 
