@@ -39,8 +39,9 @@ export async function startPgCluster(): Promise<PgCluster> {
         'Install it (Debian: apt-get install -y postgresql), set PG_BIN to its bin folder, or set TEST_DATABASE_URL=postgres://… to a server to use.',
     );
   }
-  const dir = fs.mkdtempSync(path.join(os.tmpdir(), 'junctura-pg-'));
   const asRoot = process.getuid?.() === 0;
+  // The postgres user must reach the folder: /tmp is open to all, a root TMPDIR may not be.
+  const dir = fs.mkdtempSync(path.join(asRoot ? '/tmp' : os.tmpdir(), 'junctura-pg-'));
   const owner = asRoot ? userIds('postgres') : undefined;
   if (asRoot && !owner) {
     fs.rmSync(dir, { recursive: true, force: true });
