@@ -100,8 +100,11 @@ describe('tolerance corners', () => {
     expect(result.worstCorner!.words).toBe('Rθjc +10 %, Rθsa +15 %, Interface Rθcs +20 %, Ambient +10 K, Line voltage +10 %, Load current +5 %');
   });
 
-  it('gives the same peaks through the peak scan as through the full pipeline', () => {
-    const plan = planTolerance(parseStudy(parallelStudy()), { ...NONE, mode: 'monte-carlo', rthJcPct: 10, rthSaPct: 15, ambientLowK: -5, ambientHighK: 5, loadPct: 10, sharePct: 10, runs: 30, seed: 5 });
+  it.each([
+    ['at sea level', {}],
+    ['at a 3,000 m site', { site: { altitudeM: 3000 } }],
+  ])('gives the same peaks through the peak scan as through the full pipeline %s', (_name, extra) => {
+    const plan = planTolerance(parseStudy({ ...parallelStudy(), ...extra }), { ...NONE, mode: 'monte-carlo', rthJcPct: 10, rthSaPct: 15, ambientLowK: -5, ambientHighK: 5, loadPct: 10, sharePct: 10, runs: 30, seed: 5 });
     const fast = evaluateRuns(plan, 0, 30);
     const full = evaluateRuns({ ...plan, fast: false }, 0, 30);
     expect(fast.deviations).toEqual(full.deviations);

@@ -3,6 +3,7 @@ import type { ScanProfile } from '../heatsink/scan-profile';
 import { createScanWorkspace, type ScanWorkspace } from '../heatsink/scan-workspace';
 import { CONVECTION_TOLERANCE, type StudyDocument } from '../study';
 import { selectRailTaps } from '../study/rail-selection';
+import { siteAdjusted } from '../study/site-adjust';
 import { fedDevices, segmentPower } from '../study/segment-power';
 import { createStudyModel } from '../study/study-model';
 
@@ -27,15 +28,17 @@ export function fastPathApplies(doc: StudyDocument): boolean {
  * Peak junction temperature of every device (°C, device order) of a linear study, by the
  * heatsink ranking's peak scan (src/core/heatsink/peak-scan.ts: exact modal solution per
  * segment, peaks at most PEAK_TOLERANCE_K = 1e-4 K below the exact ones) on the study's own
- * network, with each segment's dissipation from the same electrical model and rail-tap
- * selection the pipeline uses. About a hundred times cheaper than evaluateStudy per run,
+ * network (at the site's altitude), with each segment's dissipation from the same electrical
+ * model and rail-tap selection the pipeline uses. About a hundred times cheaper than evaluateStudy per run,
  * which also records events, time above target and the SOA.
  */
 /** One workspace per thread, reused from run to run (a scan never yields mid-way). */
 const shared = createScanWorkspace();
 
 export function fastPeaks(written: StudyDocument, ws: ScanWorkspace = shared): Float64Array {
-  const doc = written.railPlan ? selectRailTaps(written).doc : written;
+  // The same steps as evaluateStudy: Rθsa at the site's altitude, then the taps.
+  const atSite = siteAdjusted(written)?.doc ?? written;
+  const doc = atSite.railPlan ? selectRailTaps(atSite).doc : atSite;
   const sm = createStudyModel(doc, CONVECTION_TOLERANCE);
   const m = doc.devices.length;
   const q = m + 1;
