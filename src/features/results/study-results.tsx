@@ -28,6 +28,8 @@ export type StudyResultsProps = {
   document: unknown;
   /** A time picked on the chart (s), e.g. to pin a comment to it. */
   onPickTime?: (timeS: number) => void;
+  /** Chart points per node to solve for (the core's default without it); the live editor asks for fewer. */
+  seriesPoints?: number;
 };
 
 type SolvedProps = { result: StudyResult; mains: string | null; onPickTime?: (timeS: number) => void };
@@ -111,8 +113,8 @@ function Solved({ result, mains, onPickTime }: SolvedProps) {
 }
 
 /** The study's answer, solved in the client: verdict, heat curves, per-device and per-sink peaks, events. */
-export function StudyResults({ document, onPickTime }: StudyResultsProps) {
-  const state = useStudyResult(document);
+export function StudyResults({ document, onPickTime, seriesPoints }: StudyResultsProps) {
+  const state = useStudyResult(document, seriesPoints);
   const mains = useMemo(() => mainsHint(document), [document]);
   if (state.kind === 'empty') return null;
   return (

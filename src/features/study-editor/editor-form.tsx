@@ -29,6 +29,13 @@ import type { EditorValues, RawDocument } from './types';
 import { checkValues, useEditorCheck } from './use-editor-check';
 import { useLiveVerdict } from './use-live-verdict';
 
+/**
+ * Chart points per node of the live results: min and max per bucket keep every peak, and a
+ * results column is well under 800 px wide, so more points would not show (the saved study's
+ * own view uses the core's default).
+ */
+const LIVE_SERIES_POINTS = 800;
+
 /** How long edits wait before they are kept on the device, ms. */
 const DRAFT_DELAY_MS = 400;
 
@@ -253,7 +260,7 @@ function LiveResults({ raw, stale }: { raw: RawDocument | null; stale: boolean }
   return (
     <View style={styles.live}>
       {stale ? <InlineAlert tone="info" message={raw ? 'Results are from the last inputs without problems; fix the problems listed to update them.' : 'Results appear once the inputs have no problems.'} /> : null}
-      {raw ? <StudyResults document={raw} /> : null}
+      {raw ? <StudyResults document={raw} seriesPoints={LIVE_SERIES_POINTS} /> : null}
     </View>
   );
 }
