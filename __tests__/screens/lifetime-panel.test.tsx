@@ -78,6 +78,17 @@ describe('life, touch and site panel', () => {
     expect(screen.getByText(new RegExp(`^Site at 1800\\sm: air pressure ${sig3(ratio)} of sea level \\(standard atmosphere\\); Rθsa raised: PCB ×${sig3(1 / Math.sqrt(ratio))}`))).toBeVisible();
   });
 
+  it('adds the cold-start cycle of a periodic study: from the ambient up to the period’s junction peak', async () => {
+    const doc = { ...example('bench-electronic-load'), lifetime: { mission: { hoursPerDay: 8, startsPerDay: 1 } } };
+    showStudy(doc);
+    const device = await screen.findByTestId('lifetime-Q1', undefined, { timeout: 20000 });
+    const result = evaluateStudy(parseStudy(doc));
+    // A periodic result starts in its periodic steady state, so its peak is the period's peak (PHYSICS.md §3).
+    const range = result.devices.Q1.peakJunctionC - result.ambient.minC;
+    expect(within(device).getByText(new RegExp(`^Each cold start adds a ΔTj ${sig3(range)}\\sK cycle`))).toBeVisible();
+    expect(screen.queryByText('Touch temperature')).toBeNull();
+  });
+
   it('leaves the panel out for a study without site, lifetime or touch', async () => {
     const { site: _site, lifetime: _lifetime, touch: _touch, ...doc } = example('onboard-24v-to-5v');
     showStudy(doc);

@@ -45,6 +45,19 @@ describe('study lifetime: rainflow of the junction history, Miner damage, life i
     expect(r.lifetime!.shortest).toEqual({ device: 'U1', lifeYears: d.lifeYears });
   });
 
+  it('a cold start a day adds one cycle from the ambient to the period peak', () => {
+    const [P, tp, T] = [20, 2, 10];
+    const study = pulses(P, tp, T, { lifetime: { mission: { hoursPerDay: 8, startsPerDay: 1 } } });
+    const d = evaluateStudy(parseStudy(study)).lifetime!.devices.U1;
+    const swing = exactSwing(P, tp, T);
+    // Peak of the periodic state: the mean plus half the swing; the start cycle runs from 25 °C up to it.
+    const peak = swing.meanC + swing.rangeK / 2;
+    const start = cyclesToFailure(LESIT_MODEL, peak - TA, (peak + TA) / 2);
+    assertInDelta(d.startCycle!.rangeK, peak - TA, 1e-9, 'start range');
+    assertInRelDelta(d.damagePerDay, 2880 / cyclesToFailure(LESIT_MODEL, swing.rangeK, swing.meanC) + 1 / start, 1e-9, 'damage per day');
+    assertInRelDelta(d.lifeYears!, 1 / (d.damagePerDay * 365.25), 1e-12, 'years');
+  });
+
   it('the event-driven path counts the same cycles', () => {
     const study = pulses(20, 2, 10, { lifetime: { mission: { repeatsPerDay: 1000 } } });
     const batch = evaluateStudy(parseStudy(study)).lifetime!.devices.U1;
@@ -145,6 +158,7 @@ describe('study format: site, lifetime and touch fields', () => {
     ['a misspelt site field', (s) => (s.site = { altitude: 10 }), /^site\.altitude: unknown field/],
     ['no mission', (s) => (s.lifetime = {}), /^lifetime\.mission: is required/],
     ['both mission forms', (s) => (s.lifetime = { mission: { hoursPerDay: 2, repeatsPerDay: 3 } }), /^lifetime\.mission\.repeatsPerDay: give either/],
+    ['cold starts on a run that is not periodic', (s) => (s.lifetime = { mission: { hoursPerDay: 2, startsPerDay: 1 } }), /^lifetime\.mission\.startsPerDay: only for a periodic profile/],
     ['more than 24 h a day', (s) => (s.lifetime = { mission: { hoursPerDay: 25 } }), /^lifetime\.mission\.hoursPerDay: must be at most 24 h/],
     ['a zero exponent', (s) => (s.lifetime = { mission: { hoursPerDay: 2 }, powerCycling: { exponent: 0 } }), /^lifetime\.powerCycling\.exponent: must be greater than zero/],
     ['Arrhenius without reference', (s) => (s.lifetime = { mission: { hoursPerDay: 2 }, arrhenius: {} }), /^lifetime\.arrhenius\.referenceC: is required/],

@@ -1,5 +1,5 @@
-import { cyclesToFailure, lifeFromDamage, rainflow, rainflowPeriodic, repeatsPerDay, type PowerCyclingModel, type RainflowCycles } from '../reliability';
-import type { StudyDocument } from './types';
+import { DAYS_PER_YEAR, cyclesToFailure, lifeFromDamage, rainflow, rainflowPeriodic, repeatsPerDay, type PowerCyclingModel, type RainflowCycles } from '../reliability';
+import type { Ambient, StudyDocument } from './types';
 import type { JunctionHistory } from './junction-history';
 import type { CycleClass, CycleHistogram, DeviceLifetime, LifetimeResult } from './reliability-result-types';
 import { HISTOGRAM_BINS, MAX_LISTED_CYCLES, MIN_REPORTED_RANGE_K } from './constants';
@@ -56,6 +56,11 @@ function dominantClasses(model: PowerCyclingModel, c: RainflowCycles, damage: Fl
     }));
 }
 
+/** Lowest ambient of the study, °C: where a cold start begins. */
+function coldestAmbientC(ambient: Ambient): number {
+  return ambient.kind === 'constant' ? ambient.temperatureC : Math.min(...ambient.points.map((p) => p.temperatureC));
+}
+
 /**
  * Life of each device from its junction history (PHYSICS.md §6): rainflow counting (ASTM
  * E1049 §5.4.4; a periodic study's one period closed as a repeating block), Nf per cycle
@@ -84,7 +89,20 @@ export function lifetimeResult(doc: StudyDocument, history: JunctionHistory, per
       if (c.range[k] >= MIN_REPORTED_RANGE_K) cycles += c.count[k];
       if (c.range[k] > largest) largest = c.range[k];
     }
-    const life = lifeFromDamage(total, perDay);
+    let life = lifeFromDamage(total, perDay);
+    let startCycle: DeviceLifetime['startCycle'];
+    if (lifetime.startsPerDay > 0 && points.length > 0) {
+      // One cycle per start from the coldest ambient up to the period's highest junction temperature.
+      const low = coldestAmbientC(doc.ambient);
+      let high = -Infinity;
+      for (const v of points) if (v > high) high = v;
+      const rangeK = Math.max(0, high - low);
+      const meanC = (high + low) / 2;
+      const nf = cyclesToFailure(model, rangeK, meanC);
+      startCycle = { rangeK, meanC, cyclesToFailure: nf, damagePerDay: lifetime.startsPerDay / nf };
+      const perDayTotal = life.damagePerDay + startCycle.damagePerDay;
+      life = { ...life, damagePerDay: perDayTotal, years: perDayTotal > 0 ? 1 / (perDayTotal * DAYS_PER_YEAR) : Infinity };
+    }
     const out: DeviceLifetime = {
       device: device.id,
       cycles,
@@ -97,6 +115,7 @@ export function lifetimeResult(doc: StudyDocument, history: JunctionHistory, per
       lifeYears: Number.isFinite(life.years) ? life.years : null,
       truncated: history.truncated(d),
     };
+    if (startCycle) out.startCycle = startCycle;
     const avg = history.arrhenius(d);
     if (avg && lifetime.arrhenius) {
       const meanFactor = avg.mean();

@@ -35,19 +35,24 @@ export function parseSite(value: unknown, path: string): StudySite {
 
 function parseMission(value: unknown, path: string): Mission {
   const obj = asObject(value, path);
-  onlyKeys(obj, ['hoursPerDay', 'repeatsPerDay'], path);
+  onlyKeys(obj, ['hoursPerDay', 'repeatsPerDay', 'startsPerDay'], path);
   if (obj.hoursPerDay !== undefined && obj.repeatsPerDay !== undefined) typeFail(fieldPath(path, 'repeatsPerDay'), 'give either hoursPerDay or repeatsPerDay, not both');
   if (obj.repeatsPerDay !== undefined) return { kind: 'repeats', repeatsPerDay: readNumber(obj, 'repeatsPerDay', path, { min: 0 }) };
   if (obj.hoursPerDay === undefined) typeFail(fieldPath(path, 'hoursPerDay'), 'is required (or give repeatsPerDay)');
   return { kind: 'hours', hoursPerDay: readNumber(obj, 'hoursPerDay', path, { min: 0, max: 24, unit: 'h' }) };
 }
 
-/** Reads `lifetime`: `{ mission, powerCycling?, arrhenius? }`. */
-export function parseLifetime(value: unknown, path: string): StudyLifetime {
+/** Reads `lifetime`: `{ mission, powerCycling?, arrhenius? }`; `periodic` is the profile's, when there is one. */
+export function parseLifetime(value: unknown, path: string, periodic?: boolean): StudyLifetime {
   const obj = asObject(value, path);
   onlyKeys(obj, ['mission', 'powerCycling', 'arrhenius', 'notes'], path);
   readOptionalString(obj, 'notes', path);
-  const mission = parseMission(obj.mission, fieldPath(path, 'mission'));
+  const missionPath = fieldPath(path, 'mission');
+  const mission = parseMission(obj.mission, missionPath);
+  const startsPerDay = readOptionalNumber(obj.mission as Obj, 'startsPerDay', missionPath, { min: 0 }) ?? 0;
+  if (startsPerDay > 0 && periodic === false) {
+    rangeFail(fieldPath(missionPath, 'startsPerDay'), 'only for a periodic profile (a run that is not periodic already starts from the ambient)');
+  }
   let powerCycling = { ...LESIT_MODEL };
   if (obj.powerCycling !== undefined) {
     const p = fieldPath(path, 'powerCycling');
@@ -59,7 +64,7 @@ export function parseLifetime(value: unknown, path: string): StudyLifetime {
       activationEnergyEV: readOptionalNumber(pc, 'activationEnergyEV', p, { min: 0, max: 5, unit: 'eV' }) ?? LESIT_MODEL.activationEnergyEV,
     };
   }
-  const result: StudyLifetime = { powerCycling, mission };
+  const result: StudyLifetime = { powerCycling, mission, startsPerDay };
   if (obj.arrhenius !== undefined) {
     const p = fieldPath(path, 'arrhenius');
     const a = asObject(obj.arrhenius, p);

@@ -107,7 +107,7 @@ export function parseStudy(json: unknown): StudyDocument {
   if (enclosure) doc.enclosure = enclosure;
   if (railPlan) doc.railPlan = railPlan;
   if (root.site !== undefined) doc.site = parseSite(root.site, 'site');
-  if (root.lifetime !== undefined) doc.lifetime = parseLifetime(root.lifetime, 'lifetime');
+  if (root.lifetime !== undefined) doc.lifetime = parseLifetime(root.lifetime, 'lifetime', profile.periodic);
   if (root.touch !== undefined) doc.touch = parseTouch(root.touch, 'touch', sinks);
   return doc;
 }

@@ -36,6 +36,9 @@ export type DeviceLifetime = {
   /** The most damaging classes, most damaging first (at most MAX_LISTED_CYCLES). */
   dominant: CycleClass[];
   damagePerRepeat: number;
+  /** With startsPerDay: the cycle of each cold start (ambient to the period's peak) and its damage a day. */
+  startCycle?: { rangeK: number; meanC: number; cyclesToFailure: number; damagePerDay: number };
+  /** Cycles and cold starts together. */
   damagePerDay: number;
   /** null when the history holds no damaging cycle. */
   repeatsToFailure: number | null;

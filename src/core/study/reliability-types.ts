@@ -19,6 +19,8 @@ export type StudyArrhenius = { referenceC: number; activationEnergyEV: number };
 export type StudyLifetime = {
   powerCycling: PowerCyclingModel;
   mission: Mission;
+  /** Cold starts a day of a periodic study: each adds one cycle from the ambient to the period's highest junction temperature. */
+  startsPerDay: number;
   /** Time-weighted Arrhenius factor of each junction against referenceC. */
   arrhenius?: StudyArrhenius;
 };

@@ -61,6 +61,11 @@ function DeviceLife({ life, device }: { life: LifetimeResult; device: DeviceLife
       <Text variant="caption" tone="muted">
         {`Damage ${formatNumber(device.damagePerDay)} of the whole life per day at ${missionText(life)}.`}
       </Text>
+      {device.startCycle ? (
+        <Text variant="caption" tone="muted">
+          {`Each cold start adds a ΔTj ${formatQuantity(device.startCycle.rangeK, 'K')} cycle about ${formatQuantity(device.startCycle.meanC, '°C')} (${cyclesText(device.startCycle.cyclesToFailure)} to failure): ${shareText(device.startCycle.damagePerDay / device.damagePerDay)} of the damage a day.`}
+        </Text>
+      ) : null}
       <TwoColumns firstShare={0.5}>{[chart, details]}</TwoColumns>
     </View>
   );

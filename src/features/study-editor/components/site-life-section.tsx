@@ -81,6 +81,19 @@ export function SiteLifeSection({ document: doc }: SiteLifeSectionProps) {
           <QuantityField field="document.lifetime.mission.repeatsPerDay" value={mission?.repeatsPerDay} kind="number" label="Repeats a day" fullLabel="Mission repeats a day" hint="Whole runs of the profile a day" />
         </View>
       ) : null}
+      {lifetime && doc.profile?.periodic === true ? (
+        <View style={styles.field}>
+          <QuantityField
+            field="document.lifetime.mission.startsPerDay"
+            value={mission?.startsPerDay}
+            kind="number"
+            label="Cold starts a day"
+            optional
+            placeholder="0"
+            hint="Each adds a cycle from the ambient to the period's peak"
+          />
+        </View>
+      ) : null}
 
       <ChoiceRow
         label="Touch temperature"
