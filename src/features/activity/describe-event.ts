@@ -99,12 +99,38 @@ function catalogueEvent(event: ActivityEvent, actor: string): EventSentence | nu
   return null;
 }
 
+/** Names of the team settings in the log (src/core/study/study-defaults.ts). */
+const SETTING_NAMES: Record<string, string> = {
+  marginK: 'margin',
+  siteAltitudeM: 'site altitude',
+  siteRadiationShare: 'radiation share',
+  lifetimeInNewStudies: 'life estimate in new studies',
+  missionHoursPerDay: 'hours a day',
+  cyclingCoefficient: 'power-cycling A',
+  cyclingExponent: 'power-cycling α',
+  cyclingActivationEV: 'power-cycling Ea',
+  arrheniusReferenceC: 'Arrhenius reference',
+  arrheniusActivationEV: 'Arrhenius Ea',
+  touchMaterial: 'touch surface',
+  touchContact: 'touch contact',
+  touchLimitC: 'touch limit',
+};
+
+function settingsEvent(event: ActivityEvent, actor: string): EventSentence | null {
+  if (event.action !== 'team.settings_changed') return null;
+  const changed = detail(event, 'changed');
+  const names = Array.isArray(changed) ? changed.map((k) => SETTING_NAMES[String(k)] ?? (String(k).endsWith('Source') ? null : String(k))).filter((n): n is string => n !== null) : [];
+  const what = names.length > 0 ? `: ${names.join(', ')}` : ' (sources)';
+  return { text: `${actor} changed the team's defaults for new studies${what}` };
+}
+
 /** One event as a sentence a person reads: “Dan Designer submitted “…” revision 2 for review”. */
 export function describeEvent(event: ActivityEvent, names: ActivityNames): EventSentence {
   const actor = event.actor?.name ?? 'Someone';
   return (
     studyEvent(event, actor, names) ??
     memberEvent(event, actor, names) ??
-    catalogueEvent(event, actor) ?? { text: `${actor}: ${event.action.replace(/[._]/g, ' ')}` }
+    catalogueEvent(event, actor) ??
+    settingsEvent(event, actor) ?? { text: `${actor}: ${event.action.replace(/[._]/g, ' ')}` }
   );
 }

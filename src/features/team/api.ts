@@ -3,12 +3,14 @@ import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import { api } from '@/api';
 import { sessionKey } from '@/features/auth/api';
 import type { Role } from '@/features/auth/types';
+import type { StudyDefaults } from '@/core/study';
 import type { InvitationInput } from '@/validation';
 
-import type { Member, PendingInvitation } from './types';
+import type { Member, PendingInvitation, TeamSettings } from './types';
 
 export const membersKey = (teamId: number) => ['teams', teamId, 'members'] as const;
 export const invitationsKey = (teamId: number) => ['teams', teamId, 'invitations'] as const;
+export const teamSettingsKey = (teamId: number) => ['teams', teamId, 'settings'] as const;
 
 const teamPath = (teamId: number) => `/teams/${encodeURIComponent(teamId)}`;
 
@@ -73,4 +75,25 @@ export function useRevokeInvitation(teamId: number) {
   return useTeamMutation(teamId, async (invitationId: number) =>
     api.delete(`${teamPath(teamId)}/invitations/${encodeURIComponent(invitationId)}`),
   );
+}
+
+/** The team's defaults for new studies; every member may read them. */
+export function useTeamSettings(teamId: number | undefined) {
+  return useQuery({
+    queryKey: teamSettingsKey(teamId ?? 0),
+    queryFn: async () => (await api.get<TeamSettings>(`${teamPath(teamId!)}/settings`)).data,
+    enabled: teamId !== undefined,
+  });
+}
+
+/** Owners replace the team's defaults. */
+export function useSaveTeamSettings(teamId: number) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: async (settings: StudyDefaults) => (await api.put<TeamSettings>(`${teamPath(teamId)}/settings`, settings)).data,
+    onSuccess: async (saved) => {
+      queryClient.setQueryData(teamSettingsKey(teamId), saved);
+      await queryClient.invalidateQueries({ queryKey: ['teams', teamId, 'activity'] });
+    },
+  });
 }

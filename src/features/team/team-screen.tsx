@@ -34,20 +34,27 @@ export function TeamScreen() {
           Your role here: {ROLE_LABELS[team.role]}.
           {isOwner ? '' : ' Only owners change roles and invite members.'}
         </Text>
-        {isOwner ? (
-          <View style={styles.links}>
-            <Link href="/activity" style={styles.link}>
+        <View style={styles.links}>
+          <Link href="/team-settings" style={styles.link}>
+            <Text variant="label" tone="accent">
+              {isOwner ? 'Team settings: defaults for new studies' : 'Team settings (read-only)'}
+            </Text>
+          </Link>
+          {isOwner ? (
+            <>
+              <Link href="/activity" style={styles.link}>
               <Text variant="label" tone="accent">
                 Activity log
               </Text>
             </Link>
-            <Link href="/outbox" style={styles.link}>
-              <Text variant="label" tone="accent">
-                Outbox (development mail)
-              </Text>
-            </Link>
-          </View>
-        ) : null}
+              <Link href="/outbox" style={styles.link}>
+                <Text variant="label" tone="accent">
+                  Outbox (development mail)
+                </Text>
+              </Link>
+            </>
+          ) : null}
+        </View>
       </View>
       <MemberList key={team.teamId} teamId={team.teamId} teamName={team.teamName} userId={user.id} canManage={isOwner} />
       {isOwner ? (

@@ -1,3 +1,4 @@
+import type { StudyDefaults } from '@/core/study';
 import type { Role } from '@/features/auth/types';
 
 /** One row of `GET /api/teams/:teamId/members`. */
@@ -11,4 +12,14 @@ export type PendingInvitation = {
   expiresAt: string;
   createdAt: string;
   invitedBy: { id: number; name: string } | null;
+};
+
+/** Body of `GET /api/teams/:teamId/settings`: the team's defaults for new studies. */
+export type TeamSettings = {
+  teamId: number;
+  settings: StudyDefaults;
+  /** 0 while no owner has set any. */
+  version: number;
+  updatedAt: string | null;
+  updatedBy: { id: number; name: string } | null;
 };

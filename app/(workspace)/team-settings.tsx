@@ -1,0 +1,3 @@
+import { TeamSettingsScreen } from '@/features/team/team-settings-screen';
+
+export default TeamSettingsScreen;
