@@ -1,3 +1,4 @@
+import type { DefaultSections } from '@/core/study';
 import type { StudyStatus } from '@/validation';
 
 export type { StudyStatus };
@@ -21,5 +22,8 @@ export type StudySummary = {
 /** The approval in force: which revision, by whom, when (only while the study is approved). */
 export type Approval = { revision: number; reviewer: StudyAuthor | null; at: string };
 
-/** Body of `GET /api/studies/:id`: the summary plus the saved design document. */
-export type Study = StudySummary & { document: unknown; approval?: Approval | null };
+/**
+ * Body of `GET /api/studies/:id`: the summary plus the saved design document, and the team
+ * defaults the study was started with (its first document takes them).
+ */
+export type Study = StudySummary & { document: unknown; approval?: Approval | null; teamDefaults?: DefaultSections | null };

@@ -13,15 +13,42 @@ export type EditorActions = {
   register: (field: string, meta: FieldMeta) => () => void;
 };
 
+/** A value the study took from its team's defaults when it was started, by form field. */
+export type TeamDefault = { value: unknown; source: string };
+
 const ActionsContext = createContext<EditorActions | null>(null);
 const ErrorsContext = createContext<ReadonlyMap<string, string>>(new Map());
+const DefaultsContext = createContext<ReadonlyMap<string, TeamDefault>>(new Map());
 
-export function EditorProvider({ actions, errors, children }: { actions: EditorActions; errors: ReadonlyMap<string, string>; children: ReactNode }) {
+export function EditorProvider({
+  actions,
+  errors,
+  defaults = new Map(),
+  children,
+}: {
+  actions: EditorActions;
+  errors: ReadonlyMap<string, string>;
+  defaults?: ReadonlyMap<string, TeamDefault>;
+  children: ReactNode;
+}) {
   return (
     <ActionsContext.Provider value={actions}>
-      <ErrorsContext.Provider value={errors}>{children}</ErrorsContext.Provider>
+      <ErrorsContext.Provider value={errors}>
+        <DefaultsContext.Provider value={defaults}>{children}</DefaultsContext.Provider>
+      </ErrorsContext.Provider>
     </ActionsContext.Provider>
   );
+}
+
+/** "From team defaults (source)" while the field still holds the value it took from them. */
+export function useTeamDefaultNote(field: string, value: unknown): string | undefined {
+  const d = useContext(DefaultsContext).get(field);
+  return d && d.value === value ? `From team defaults (${d.source})` : undefined;
+}
+
+/** Every value the study took from its team's defaults, with the field it sits in. */
+export function useTeamDefaults(): ReadonlyMap<string, TeamDefault> {
+  return useContext(DefaultsContext);
 }
 
 export function useEditorActions(): EditorActions {

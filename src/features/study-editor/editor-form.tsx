@@ -25,6 +25,7 @@ import { clearDrafts, findDraft, saveDraft, type Draft } from './draft-storage';
 import { EditorProvider, type EditorActions, type FieldMeta } from './editor-context';
 import { saveBody, valuesFromStudy } from './editor-values';
 import { SECTION_ORDER, sectionOf, type SectionKey } from './field-path';
+import { teamDefaultFields } from './team-default-fields';
 import type { EditorValues, RawDocument } from './types';
 import { checkValues, useEditorCheck } from './use-editor-check';
 import { useLiveVerdict } from './use-live-verdict';
@@ -87,6 +88,7 @@ export function EditorForm({ study }: EditorFormProps) {
     [setFieldValue],
   );
 
+  const teamDefaults = useMemo(() => teamDefaultFields(study.teamDefaults), [study.teamDefaults]);
   const check = useEditorCheck(values, fields, form.initialValues);
   const lastGood = check.lastGood;
 
@@ -229,7 +231,7 @@ export function EditorForm({ study }: EditorFormProps) {
   const stale = check.parsed === null;
 
   return (
-    <EditorProvider actions={actions} errors={errors}>
+    <EditorProvider actions={actions} errors={errors} defaults={teamDefaults}>
       {wide ? (
         <View style={styles.wideRoot}>
           <View style={styles.wideHeader}>{header}</View>

@@ -10,6 +10,7 @@ import { studyCreateSchema } from '@/validation';
 
 import { useCreateStudy } from '../api';
 import type { Study } from '../types';
+import { NewStudyDefaults } from './new-study-defaults';
 import { TeamPicker } from './team-picker';
 
 export type NewStudyFormProps = {
@@ -69,6 +70,7 @@ export function NewStudyForm({ teams, initialTeamId, onCreated, onCancel }: NewS
         error={shownError('description')}
         multiline
       />
+      <NewStudyDefaults teamId={form.values.teamId} />
       {serverError ? <InlineAlert message={serverError} /> : null}
       <View style={styles.actions}>
         <Button label="Create study" onPress={() => form.handleSubmit()} busy={form.isSubmitting} />

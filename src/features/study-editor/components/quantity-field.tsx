@@ -3,7 +3,7 @@ import { StyleSheet, View } from 'react-native';
 
 import { TextField } from '@/components/ui';
 
-import { useEditorActions, useFieldError, useRegisterField } from '../editor-context';
+import { useEditorActions, useFieldError, useRegisterField, useTeamDefaultNote } from '../editor-context';
 import { editText, readText, unitOf, type FieldKind } from '../quantity-text';
 
 export type QuantityFieldProps = {
@@ -46,6 +46,7 @@ export const QuantityField = memo(function QuantityField({ field, value, kind, l
   const named = fullLabel ?? label;
   useRegisterField(field, named, kind);
   const problem = useFieldError(field);
+  const fromTeam = useTeamDefaultNote(field, value);
   const [text, setText] = useState(() => shown(value, kind));
 
   useEffect(() => {
@@ -77,7 +78,7 @@ export const QuantityField = memo(function QuantityField({ field, value, kind, l
           if (typeof value === 'number') setText(editText(value, kind));
         }}
         error={error}
-        hint={hint}
+        hint={fromTeam ? (hint ? `${fromTeam}. ${hint}` : fromTeam) : hint}
         autoCapitalize="none"
         autoCorrect={false}
         placeholder={optional ? (placeholder ?? 'not set') : undefined}

@@ -5,6 +5,7 @@ import { spacing } from '@/constants/theme';
 
 import type { EditorValues } from '../types';
 import { QuantityField } from './quantity-field';
+import { TeamDefaultsNote } from './team-defaults-note';
 import { TextEntry } from './text-entry';
 
 export type StudyFieldsProps = { values: EditorValues };
@@ -27,6 +28,7 @@ export function StudyFields({ values }: StudyFieldsProps) {
           size="full"
         />
       </View>
+      <TeamDefaultsNote document={values.document} />
       <Text variant="caption" tone="faint">
         Format {String(values.document.format ?? '—')} v{String(values.document.version ?? '—')}
       </Text>
