@@ -1,12 +1,9 @@
-import { MAX_RUNS, MAX_SPREAD_PCT, planTolerance, summariseTolerance, type ToleranceResult, type ToleranceSpec } from '../../src/core/tolerance';
-import { TOLERANCE_LIMITS, type ToleranceInput } from '../../src/validation/tolerance';
+import { planTolerance, summariseTolerance, type ToleranceResult, type ToleranceSpec } from '../../src/core/tolerance';
+import type { ToleranceInput } from '../../src/validation/tolerance';
 import { AppError } from '../errors';
 import type { Study } from '../models';
 import { tolerancePool, sweepInPool } from '../workers/tolerance-pool';
 import { checkDocument } from './study-document';
-
-// The shared schema repeats the core's limits for the client; they must agree.
-if (TOLERANCE_LIMITS.maxRuns !== MAX_RUNS || TOLERANCE_LIMITS.maxSpreadPct !== MAX_SPREAD_PCT) throw new Error('src/validation/tolerance.ts and src/core/tolerance disagree on the limits');
 
 function badRequest(err: Error): AppError {
   const cut = err.message.indexOf(': ');

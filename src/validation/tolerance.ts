@@ -1,11 +1,12 @@
 import * as yup from 'yup';
 
+import { MAX_AMBIENT_SHIFT_K, MAX_RUNS, MAX_SPREAD_PCT } from '../core/tolerance/constants';
+
 /**
- * Limits the form and `POST /api/studies/:id/tolerance` share. The core
- * (src/core/tolerance) checks the same limits and the study-dependent ones (corner count,
- * total work); the values are repeated here so the client bundle does not pull the core in.
+ * Limits the form and `POST /api/studies/:id/tolerance` share: the core's own
+ * (src/core/tolerance), which also checks the study-dependent ones (corner count, total work).
  */
-export const TOLERANCE_LIMITS = { maxRuns: 20_000, maxSpreadPct: 50, maxAmbientShiftK: 100, maxSeed: 4_294_967_295 } as const;
+export const TOLERANCE_LIMITS = { maxRuns: MAX_RUNS, maxSpreadPct: MAX_SPREAD_PCT, maxAmbientShiftK: MAX_AMBIENT_SHIFT_K, maxSeed: 4_294_967_295 } as const;
 
 const number = (label: string) =>
   yup

@@ -3,7 +3,7 @@ import { StyleSheet, View } from 'react-native';
 
 import { Button, Chip, Text, TextField } from '@/components/ui';
 import { spacing } from '@/constants/theme';
-import type { ToleranceInput } from '@/validation/tolerance';
+import { TOLERANCE_LIMITS, type ToleranceInput } from '@/validation/tolerance';
 
 import { initialToleranceValues, readToleranceForm, type ToleranceFormValues } from '../tolerance-form-values';
 import { DISTRIBUTION_TEXT } from '../tolerance-text';
@@ -74,7 +74,7 @@ export function ToleranceForm({ running, fieldErrors, onRun, onStop }: Tolerance
       {monteCarlo ? (
         <>
           <View style={styles.fields}>
-            {field('runs', 'Runs', 'count', 'At most 20,000')}
+            {field('runs', 'Runs', 'count', `At most ${TOLERANCE_LIMITS.maxRuns.toLocaleString('en')}`)}
             {field('seed', 'Seed', 'whole number')}
           </View>
           <View style={styles.group}>
