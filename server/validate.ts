@@ -24,6 +24,12 @@ function checkTypes(d: Described, value: unknown, path: string, out: ErrorDetail
     out.push({ path: path || '(body)', message: `must be ${NOUN[d.type]}` });
     return;
   }
+  // PostgreSQL text cannot hold U+0000 (the driver would store the two characters "\0"
+  // instead); refused on SQLite too, so both store what was typed or answer the same 400.
+  if (typeof value === 'string' && value.includes('\u0000')) {
+    out.push({ path: path || '(body)', message: 'must not contain the NUL character (U+0000)' });
+    return;
+  }
   if (d.type === 'object' && d.fields) {
     for (const [key, field] of Object.entries(d.fields)) checkTypes(field, (value as Record<string, unknown>)[key], path ? `${path}.${key}` : key, out);
   }

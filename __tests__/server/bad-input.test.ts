@@ -108,6 +108,14 @@ describe('other bad requests', () => {
     expect(res.body.error.details[0].path).toBe('(body)');
   });
 
+  it('refuses text holding the NUL character, which PostgreSQL text cannot store, naming the field', async () => {
+    const before = await counts();
+    const res = await owner.post('/api/studies').send({ title: 'Load\u0000bank', description: 'fine' });
+    expect(res.status).toBe(400);
+    expect(res.body.error.details).toEqual([{ path: 'title', message: 'must not contain the NUL character (U+0000)' }]);
+    expect(await counts()).toEqual(before);
+  });
+
   it('stores script- and SQL-like text verbatim as data, never executing it', async () => {
     const res = await owner.post('/api/studies').send({ title: `${script} ${sqlish}` });
     expect(res.status).toBe(201);
