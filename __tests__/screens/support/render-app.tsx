@@ -32,6 +32,7 @@ import StudyReportRoute from '../../../app/(workspace)/studies/[id]/report';
 import RevisionRoute from '../../../app/(workspace)/studies/[id]/revisions/[number]';
 import NewStudyRoute from '../../../app/(workspace)/studies/new';
 import TeamRoute from '../../../app/(workspace)/team';
+import TeamSettingsRoute from '../../../app/(workspace)/team-settings';
 import InvitationRoute from '../../../app/invitations/[token]';
 import ResetPasswordRoute from '../../../app/reset-password/[token]';
 
@@ -67,6 +68,7 @@ export function renderApp(initialUrl: string) {
       '(workspace)/studies/[id]/report': StudyReportRoute,
       '(workspace)/studies/[id]/revisions/[number]': RevisionRoute,
       '(workspace)/team': TeamRoute,
+      '(workspace)/team-settings': TeamSettingsRoute,
       '(workspace)/outbox': OutboxRoute,
       '(workspace)/activity': ActivityRoute,
       '(workspace)/heatsinks/index': HeatsinksRoute,
