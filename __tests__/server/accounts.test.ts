@@ -36,6 +36,14 @@ describe('POST /api/accounts', () => {
     expect(res.body.error.code).toBe('email_taken');
   });
 
+  it('lets one of two simultaneous sign-ups with one address in and answers the other 409', async () => {
+    const body = { ...valid, email: 'twice@example.com' };
+    const [a, b] = await Promise.all([request(ctx.app).post('/api/accounts').send(body), request(ctx.app).post('/api/accounts').send(body)]);
+    expect([a.status, b.status].sort()).toEqual([201, 409]);
+    expect([a, b].find((r) => r.status === 409)!.body.error.code).toBe('email_taken');
+    expect(await ctx.db.models.User.count({ where: { email: 'twice@example.com' } })).toBe(1);
+  });
+
   it('answers 400 naming the short password and the missing team name', async () => {
     const res = await request(ctx.app).post('/api/accounts').send({ name: 'X', email: 'x@example.com', password: 'short' });
     expect(res.status).toBe(400);

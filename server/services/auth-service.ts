@@ -1,4 +1,5 @@
 import bcrypt from 'bcryptjs';
+import { UniqueConstraintError } from 'sequelize';
 import type { SignInInput, SignUpInput } from '../../src/validation/auth';
 import { AppError } from '../errors';
 import type { Db } from '../db';
@@ -44,18 +45,22 @@ export async function signIn(db: Db, input: SignInInput, bcryptCost: number): Pr
 
 /** Creates the account and its first team, with the new user as owner. */
 export async function signUp(db: Db, input: SignUpInput, bcryptCost: number): Promise<SessionView> {
-  const existing = await db.models.User.findOne({ where: { email: input.email } });
-  if (existing) {
-    throw new AppError(409, 'email_taken', 'An account with this e-mail already exists: sign in instead', [
-      { path: 'email', message: 'is already registered' },
-    ]);
-  }
+  const taken = () =>
+    new AppError(409, 'email_taken', 'An account with this e-mail already exists: sign in instead', [{ path: 'email', message: 'is already registered' }]);
+  if (await db.models.User.findOne({ where: { email: input.email } })) throw taken();
   const passwordHash = await hashPassword(input.password, bcryptCost);
-  const userId = await db.sequelize.transaction(async (transaction) => {
-    const user = await db.models.User.create({ email: input.email, name: input.name, passwordHash }, { transaction });
-    const team = await db.models.Team.create({ name: input.teamName }, { transaction });
-    await db.models.Membership.create({ userId: user.id, teamId: team.id, role: 'owner' }, { transaction });
-    return user.id;
-  });
+  const userId = await db.sequelize
+    .transaction(async (transaction) => {
+      const user = await db.models.User.create({ email: input.email, name: input.name, passwordHash }, { transaction });
+      const team = await db.models.Team.create({ name: input.teamName }, { transaction });
+      await db.models.Membership.create({ userId: user.id, teamId: team.id, role: 'owner' }, { transaction });
+      return user.id;
+    })
+    .catch((err: unknown) => {
+      // Two sign-ups with one address at the same moment (perhaps in two server processes)
+      // both pass the check above; the unique index lets one in and the other hears the same 409.
+      if (err instanceof UniqueConstraintError) throw taken();
+      throw err;
+    });
   return (await sessionView(db, userId))!;
 }
