@@ -6,7 +6,8 @@ import { signIn, startTestServer } from './test-server';
  * `npm run loadtest [-- --short] [--json]`: the real server in its own process on loopback,
  * autocannon as the client. Mixed signed-in traffic: list studies, open one, solve it, comment
  * on it, save it (saves carry the version they read; a 409 is the expected answer to a stale
- * one). Every acknowledged write is counted and read back afterwards.
+ * one). Every acknowledged write is counted and read back afterwards. `--database-url=URL`
+ * runs the server on that (empty) database instead of a fresh SQLite file, e.g. PostgreSQL.
  */
 async function main() {
   const short = process.argv.includes('--short');
@@ -14,7 +15,8 @@ async function main() {
   const connections = short ? 10 : 50;
   const duration = short ? 5 : 30;
 
-  const server = await startTestServer();
+  const databaseUrl = process.argv.find((a) => a.startsWith('--database-url='))?.slice('--database-url='.length);
+  const server = await startTestServer({ databaseUrl });
   try {
     const cookie = await signIn(server.url, 'designer@example.com', DEMO_PASSWORD);
     const headers = { cookie, 'content-type': 'application/json' };
