@@ -1,10 +1,12 @@
 import { fireEvent, screen, waitFor, within } from 'expo-router/testing-library';
 
 import { api } from '@/api/client';
+import { clearDrafts } from '@/features/study-editor/draft-storage';
 import { EMPTY_STUDY_DEFAULTS, type StudyDefaults } from '@/core/study';
 
 import { httpError, ok, routeApi } from './support/http';
 import { renderApp } from './support/render-app';
+import { editableStudy } from './support/editor-fixtures';
 import { PEOPLE, sessionAs } from './support/teamwork-fixtures';
 
 jest.mock('@/api/client', () => ({
@@ -102,5 +104,29 @@ describe('team settings screen', () => {
     expect(await screen.findByText('must be at most about 11,000 m')).toBeVisible();
     // What was typed stays.
     expect(screen.getByLabelText('Source of α').props.value).toBe('maker report (demo data)');
+  });
+
+  it('starts a new study’s editor from the defaults it was created with and notes them', async () => {
+    clearDrafts(21);
+    const teamDefaults = {
+      document: { marginK: 25, site: { altitudeM: 1500 } },
+      sources: { marginK: 'lab design rule 4', 'site.altitudeM': 'plant survey (demo data)' },
+    };
+    routeApi(mockedApi, {
+      'GET /session': () => ok(sessionAs('designer')),
+      'GET /studies/21': () => ok({ study: editableStudy(1, { document: null, teamDefaults }) }),
+    });
+    renderApp('/studies/21/edit');
+    await screen.findByText('Editing from version 1');
+    fireEvent.press(screen.getByRole('button', { name: /^Study and margin/ }));
+
+    const margin = await screen.findByLabelText('Margin below Tj,max (K)');
+    expect(margin.props.value).toBe('25 K');
+    expect(screen.getByText(/^From team defaults \(lab design rule 4\)/)).toBeVisible();
+    expect(within(screen.getByTestId('team-defaults-note')).getByText(/margin, site altitude .*does not change it/)).toBeVisible();
+
+    // Once the value is changed it is the study's own: the field's note goes.
+    fireEvent.changeText(margin, '22');
+    await waitFor(() => expect(screen.queryByText(/^From team defaults \(lab design rule 4\)/)).toBeNull());
   });
 });

@@ -1,5 +1,5 @@
 import { useFormik, type FormikProps } from 'formik';
-import { useState } from 'react';
+import { Children, useState } from 'react';
 import { StyleSheet, View } from 'react-native';
 
 import { errorMessage, fieldErrors } from '@/api';
@@ -62,9 +62,12 @@ function Source({ form, field, label = 'Source', hint }: { form: Form; field: So
   );
 }
 
+/** Fields side by side on a wide screen, one under the other on a phone. */
 function Row({ children }: { children: React.ReactNode }) {
   const wide = useIsWide();
-  return <View style={wide ? styles.row : styles.column}>{children}</View>;
+  if (!wide) return <View style={styles.column}>{children}</View>;
+  // A flex basis only along a row: in a column it would set the height.
+  return <View style={styles.row}>{Children.map(children, (child) => <View style={styles.cell}>{child}</View>)}</View>;
 }
 
 function Section({ title, note, children }: { title: string; note?: string; children: React.ReactNode }) {
@@ -192,7 +195,8 @@ const styles = StyleSheet.create({
   fields: { gap: spacing.md, marginTop: spacing.xs },
   row: { flexDirection: 'row', gap: spacing.md, alignItems: 'flex-start' },
   column: { gap: spacing.md },
-  quantity: { flexGrow: 1, flexBasis: 0, minWidth: 160 },
-  source: { flexGrow: 1, flexBasis: 0, minWidth: 160 },
+  cell: { flexGrow: 1, flexBasis: 0, minWidth: 160 },
+  quantity: { maxWidth: 520 },
+  source: { maxWidth: 520 },
   actions: { flexDirection: 'row', flexWrap: 'wrap', gap: spacing.sm },
 });
