@@ -117,6 +117,9 @@ describe('live results of a 10,000-segment study in the browser', () => {
     const openAll = page.getByRole('button', { name: 'Open all sections' });
     if ((await openAll.count()) > 0) await openAll.click();
     const timings: Timing[] = [];
+    let workersStarted = 0;
+    const countWorker = () => void workersStarted++;
+    page.on('worker', countWorker);
     for (let i = 0; i < EDITS; i++) {
       const t = AMBIENTS[i % AMBIENTS.length];
       const want = expected.get(t)!;
@@ -129,12 +132,13 @@ describe('live results of a 10,000-segment study in the browser', () => {
       }
       timings.push(timing);
     }
+    page.off('worker', countWorker);
     const measured = timings.slice(1);
     process.stdout.write(
       `Live results, ${label}, 10,000 segments with rail plan and SOA: edit → verdict median ${median(measured.map((m) => m.ms)).toFixed(0)} ms ` +
         `(${measured.map((m) => m.ms.toFixed(0)).join(', ')} ms); longest main-thread task median ${median(measured.map((m) => m.longestTaskMs)).toFixed(0)} ms ` +
         `(${measured.map((m) => m.longestTaskMs.toFixed(0)).join(', ')} ms); ` +
-        `solve in the worker median ${fmt(measured.map((m) => m.workerMs))} ms, request to reply ${fmt(measured.map((m) => m.roundTripMs))} ms\n`,
+        `solve in the worker median ${fmt(measured.map((m) => m.workerMs))} ms, request to reply ${fmt(measured.map((m) => m.roundTripMs))} ms; workers started during the edits: ${workersStarted}\n`,
     );
     // The solve runs in a Web Worker, off the page's main thread (playwright lists the page's workers).
     expect(page.workers().length).toBeGreaterThan(0);
