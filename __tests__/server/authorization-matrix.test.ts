@@ -47,6 +47,8 @@ const ROWS: Row[] = [
   { name: 'comment', method: 'post', path: (f) => `/api/studies/${f.studyId}/comments`, body: () => ({ body: 'Check the burst at 38 s' }), expect: { ...read, reviewer: 201, designer: 201, owner: 201 } },
   { name: "delete the designer's comment", method: 'delete', path: (f) => `/api/studies/${f.studyId}/comments/${f.commentId}`, expect: edit(204) },
   { name: 'list members', method: 'get', path: (f) => `/api/teams/${f.teamId}/members`, expect: read },
+  { name: 'read the team settings', method: 'get', path: (f) => `/api/teams/${f.teamId}/settings`, expect: read },
+  { name: 'change the team settings', method: 'put', path: (f) => `/api/teams/${f.teamId}/settings`, body: () => ({ marginK: 25 }), expect: ownerOnly(200) },
   { name: 'change a role', method: 'patch', path: (f) => `/api/teams/${f.teamId}/members/${f.extraUserId}`, body: () => ({ role: 'reviewer' }), expect: ownerOnly(200) },
   { name: 'remove a member', method: 'delete', path: (f) => `/api/teams/${f.teamId}/members/${f.extraUserId}`, expect: ownerOnly(204) },
   { name: 'list invitations', method: 'get', path: (f) => `/api/teams/${f.teamId}/invitations`, expect: ownerOnly(200) },
