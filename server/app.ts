@@ -58,7 +58,8 @@ export function createApp(config: Config, db: Db = createDb(config.databaseUrl, 
       resave: false,
       saveUninitialized: false,
       rolling: false,
-      proxy: config.trustProxy,
+      // With a hop count, Express's own trust proxy rule decides whether the request was secure.
+      proxy: typeof config.trustProxy === 'number' ? undefined : config.trustProxy,
       cookie: { httpOnly: true, sameSite: 'lax', secure: 'auto', maxAge: SESSION_MAX_AGE_MS, path: '/' },
     }),
   );

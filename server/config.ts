@@ -10,8 +10,12 @@ export type Config = {
   /** PostgreSQL connections each server process keeps at most. */
   databasePoolMax: number;
   sessionSecret: string;
-  /** Express "trust proxy" setting: true behind a TLS-terminating proxy, so Secure cookies work. */
-  trustProxy: boolean;
+  /**
+   * Express "trust proxy" setting behind a TLS-terminating proxy, so Secure cookies work: the
+   * number of proxies in front (their X-Forwarded-For entries are believed, the client's own
+   * are not), or true to believe every hop.
+   */
+  trustProxy: boolean | number;
   seedDemo: boolean;
   /** Folder with the exported web app; the server serves it when it exists. */
   webDir: string;
@@ -44,6 +48,20 @@ function parseBool(value: string | undefined, fallback: boolean, name: string, p
   if (['0', 'false', 'no'].includes(value.toLowerCase())) return false;
   problems.push(`${name} must be true or false (got "${value}")`);
   return fallback;
+}
+
+/**
+ * `TRUST_PROXY`: true or false, or the number of proxies in front (0 is false). A number is
+ * safer: `true` believes every X-Forwarded-For entry, including ones a client made up.
+ */
+function parseTrustProxy(value: string | undefined, problems: string[]): boolean | number {
+  const v = (value ?? '').trim();
+  if (/^\d+$/.test(v)) return Number(v) === 0 ? false : Number(v);
+  if (v !== '' && !['true', 'false', 'yes', 'no'].includes(v.toLowerCase())) {
+    problems.push(`TRUST_PROXY must be true, false or the number of proxies in front (got "${value}")`);
+    return false;
+  }
+  return parseBool(v, false, 'TRUST_PROXY', problems);
 }
 
 /**
@@ -114,7 +132,7 @@ export function loadConfig(env: Record<string, string | undefined> = process.env
     databaseUrl,
     databasePoolMax,
     sessionSecret,
-    trustProxy: parseBool(env.TRUST_PROXY, false, 'TRUST_PROXY', problems),
+    trustProxy: parseTrustProxy(env.TRUST_PROXY, problems),
     seedDemo: parseBool(env.SEED_DEMO, true, 'SEED_DEMO', problems),
     webDir: path.resolve(env.WEB_DIR ?? 'dist'),
     bcryptCost,
