@@ -66,5 +66,19 @@ describe.each<[string, Viewport]>([
     await page.getByText(`From team defaults (${SOURCE})`, { exact: false }).first().waitFor();
     await page.getByTestId('team-defaults-note').waitFor();
     await screenshot(page, viewport, 'editor-team-defaults');
+
+    // A designer reads the same defaults, each with its source, and cannot change them.
+    await page.context().clearCookies();
+    await signIn(page, 'designer@example.com');
+    await page.goto(`${baseUrl()}/team-settings`);
+    await page.getByText('Only owners change the team settings; you see them read-only.').waitFor();
+    await page.getByText(`Team default · ${SOURCE}`).waitFor();
+    expect(await page.getByRole('button', { name: 'Save team settings' }).count()).toBe(0);
+    const refused = await page.request.put(`${baseUrl()}/api/teams/${teamId}/settings`, { data: { marginK: 10 } });
+    expect(refused.status()).toBe(403);
+    await screenshot(page, viewport, 'team-settings-read-only');
+    // Sign the owner back in for the clean-up.
+    await page.context().clearCookies();
+    await signIn(page, 'owner@example.com');
   });
 });
