@@ -153,6 +153,16 @@ describe('study editor: rail plan and SOA models', () => {
     expect(soa.notes).toBe(labSupply.devices[0].soa.notes);
   });
 
+  it('shows the SOA check follow an Ic,max edit in the phone’s verdict line', async () => {
+    await openEditor();
+    const verdict = await screen.findByTestId('live-verdict');
+    await waitFor(() => expect(verdict).toHaveTextContent(/SOA check passes for Q1/));
+    openSection(/^Pass elements/);
+    // Each part of the pair carries up to 1.6 A (the demo's current limit per part), above an Ic,max of 1 A: the horizontal limit of the SOA (docs/study-format.md, soa).
+    fireEvent.changeText(screen.getByLabelText('Q1 Ic,max (A)'), '1 A');
+    await waitFor(() => expect(screen.getByTestId('live-verdict')).toHaveTextContent(/SOA check fails for Q1/));
+  });
+
   it('gives a device without an SOA a datasheet-points model with a point list', async () => {
     const puts = await openEditor(editableStudy());
     openSection(/^Pass elements/);

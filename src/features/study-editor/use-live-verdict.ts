@@ -1,6 +1,7 @@
 import { useMemo } from 'react';
 
 import { useSolve } from '@/features/results/use-solve';
+import { soaSummary } from '@/features/results/soa-text';
 import { studyVerdict, type Verdict } from '@/features/results/verdict';
 
 import type { RawDocument } from './types';
@@ -19,7 +20,13 @@ const VERDICT_ONLY = { seriesPoints: 0 };
  */
 export function useLiveVerdict(raw: RawDocument | null, enabled: boolean): LiveVerdict {
   const { outcome, updating } = useSolve(raw, VERDICT_ONLY, enabled);
-  const verdict = useMemo(() => (outcome?.kind === 'ok' ? studyVerdict(outcome.result) : null), [outcome]);
+  // The SOA check in a line under the verdict, as the full results give it.
+  const verdict = useMemo(() => {
+    if (outcome?.kind !== 'ok') return null;
+    const v = studyVerdict(outcome.result);
+    const soa = soaSummary(outcome.result.soa);
+    return soa ? { ...v, notes: [...v.notes, soa] } : v;
+  }, [outcome]);
   if (!outcome) return { kind: 'waiting' };
   if (outcome.kind === 'ok') return { kind: 'ok', verdict: verdict!, warnings: outcome.result.warnings, updating };
   return { kind: 'failed', message: outcome.message, updating };
