@@ -29,7 +29,7 @@ export function defaultLines(s: StudyDefaults): DefaultLine[] {
     key: 'lifetimeInNewStudies',
     label: 'Life estimate in new studies',
     value: s.lifetimeInNewStudies ? `included, ${s.missionHoursPerDay === null ? '?' : num(s.missionHoursPerDay)} h a day` : 'left out',
-    source: 'team setting',
+    source: s.lifetimeInNewStudies ? 'team setting' : 'built in: a study has no life estimate until someone adds one',
     fromTeam: s.lifetimeInNewStudies,
   });
   lines.push(

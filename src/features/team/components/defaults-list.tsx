@@ -18,7 +18,7 @@ export function DefaultsList({ lines, testID }: DefaultsListProps) {
             <Text tone={l.fromTeam ? 'default' : 'muted'}>{l.value}</Text>
           </View>
           <Text variant="caption" tone="faint">
-            {l.fromTeam ? `Team default · ${l.source}` : l.source}
+            {!l.fromTeam ? l.source : l.source === 'team setting' ? 'Team default (no source given)' : `Team default · ${l.source}`}
           </Text>
         </View>
       ))}
