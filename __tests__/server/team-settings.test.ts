@@ -18,6 +18,7 @@ beforeAll(async () => {
   await makeUser(ctx.db, 'designer@a.test', [{ teamId, role: 'designer' }]);
   await makeUser(ctx.db, 'reviewer@a.test', [{ teamId, role: 'reviewer' }]);
   await makeUser(ctx.db, 'owner@b.test', [{ teamId: otherTeamId, role: 'owner' }]);
+  await makeUser(ctx.db, 'owner2@b.test', [{ teamId: otherTeamId, role: 'owner' }]);
 });
 afterAll(() => ctx.close());
 
@@ -37,7 +38,7 @@ describe('GET /api/teams/:id/settings', () => {
   });
 
   it('answers 404 to someone outside the team, for reading and for writing', async () => {
-    const agent = await signedIn(ctx.app, 'owner@b.test');
+    const agent = await signedIn(ctx.app, 'owner2@b.test');
     expect((await agent.get(settingsUrl(teamId))).status).toBe(404);
     expect((await agent.put(settingsUrl(teamId)).send({ marginK: 30 })).status).toBe(404);
     expect((await agent.get('/api/teams/999999/settings')).status).toBe(404);
@@ -155,6 +156,18 @@ describe('new studies take the defaults', () => {
     const other = await signedIn(ctx.app, 'owner@b.test');
     const plain = (await other.post('/api/studies').send({ title: 'No defaults', teamId: otherTeamId })).body.study;
     expect(plain.teamDefaults).toBeNull();
+  });
+
+  it('takes two owners saving at once one after the other: one row, both changes counted', async () => {
+    const [a, b] = [await signedIn(ctx.app, 'owner@b.test'), await signedIn(ctx.app, 'owner2@b.test')];
+    const [ra, rb] = await Promise.all([a.put(settingsUrl(otherTeamId)).send({ marginK: 22 }), b.put(settingsUrl(otherTeamId)).send({ siteAltitudeM: 800 })]);
+    expect([ra.status, rb.status]).toEqual([200, 200]);
+    expect(await ctx.db.models.TeamSetting.count({ where: { teamId: otherTeamId } })).toBe(1);
+    const final = (await a.get(settingsUrl(otherTeamId))).body;
+    expect(final.version).toBe(2);
+    // The later save replaces the whole set: exactly one of the two values survives.
+    expect([final.settings.marginK, final.settings.siteAltitudeM].filter((v) => v !== null)).toHaveLength(1);
+    await a.put(settingsUrl(otherTeamId)).send({});
   });
 
   it('copies the defaults a study was started with into its duplicate', async () => {
