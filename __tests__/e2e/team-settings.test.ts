@@ -50,6 +50,7 @@ describe.each<[string, Viewport]>([
     await page.goto(`${baseUrl()}/studies/new`);
     await page.getByText(`Margin below Tj,max: 27 K (${SOURCE})`).waitFor();
     await page.getByLabel('Title').fill(title);
+    await screenshot(page, viewport, 'new-study-team-defaults');
     await page.getByRole('button', { name: 'Create study' }).click();
     await page.getByRole('heading', { name: title }).waitFor();
     const id = Number(new URL(page.url()).pathname.split('/').pop());
