@@ -21,8 +21,8 @@ async function api<T>(page: Page, method: 'post' | 'delete', path: string, data?
 
 /** The server's own solve of the same document: the reference the page's verdict is checked against. */
 async function serverVerdict(page: Page, document: unknown): Promise<Verdict> {
-  const { result } = await api<{ result: { meetsTarget: boolean; worst: { marginToTargetK: number } | null } }>(page, 'post', '/solve', { document });
-  return { passes: result.meetsTarget, marginK: result.worst?.marginToTargetK ?? null };
+  const { result } = await api<{ result: { meetsTarget: boolean; soaPasses: boolean; worst: { marginToTargetK: number } | null } }>(page, 'post', '/solve', { document });
+  return { passes: result.meetsTarget && result.soaPasses, marginK: result.worst?.marginToTargetK ?? null };
 }
 
 const fmt = (xs: (number | null)[]) => {
