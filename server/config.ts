@@ -31,6 +31,8 @@ export type Config = {
   outboxReadable: boolean;
   /** Sign-in, sign-up and reset attempts allowed per client address per 15 minutes. */
   authRateLimit: number;
+  /** Where the sign-in limiter counts: the database (shared by every process) or this process's memory. */
+  authRateLimitStore: 'database' | 'memory';
 };
 
 export class ConfigError extends Error {
@@ -140,10 +142,12 @@ export function loadConfig(env: Record<string, string | undefined> = process.env
     smtpUrl: env.SMTP_URL || undefined,
     mailFrom: env.MAIL_FROM ?? 'Junctura <no-reply@junctura.invalid>',
     authRateLimit: Number(env.AUTH_RATE_LIMIT ?? (nodeEnv === 'test' ? 1000 : 30)),
+    authRateLimitStore: (env.AUTH_RATE_LIMIT_STORE ?? 'database') as Config['authRateLimitStore'],
     outboxReadable: nodeEnv !== 'production' && !env.SMTP_URL,
     corsOrigins: (env.CORS_ORIGINS ?? '').split(',').map((o) => o.trim()).filter(Boolean),
   };
   if (!Number.isInteger(config.authRateLimit) || config.authRateLimit < 1) problems.push('AUTH_RATE_LIMIT must be a whole number of at least 1');
+  if (!['database', 'memory'].includes(config.authRateLimitStore)) problems.push(`AUTH_RATE_LIMIT_STORE must be database or memory (got "${config.authRateLimitStore}")`);
   if (config.smtpUrl && !/^smtps?:\/\//.test(config.smtpUrl)) problems.push('SMTP_URL must start with smtp:// or smtps://');
   if (!/^https?:\/\/[^/]+/.test(config.appUrl)) problems.push(`APP_URL must look like https://host (got "${config.appUrl}")`);
   for (const origin of config.corsOrigins) {

@@ -17,11 +17,11 @@ describe('migrations', () => {
 
   it('create every table, apply once only, and roll back cleanly', async () => {
     expect(db.dialect).toBe(TEST_DIALECT);
-    expect(await migrateUp(db.sequelize)).toEqual(['0001-initial', '0002-team-work', '0003-catalogues', '0004-parts', '0005-team-settings']);
+    expect(await migrateUp(db.sequelize)).toEqual(['0001-initial', '0002-team-work', '0003-catalogues', '0004-parts', '0005-team-settings', '0006-auth-attempts']);
     expect(await migrateUp(db.sequelize)).toEqual([]);
     const tables = (await db.sequelize.getQueryInterface().showAllTables()).sort();
     expect(tables).toEqual(expect.arrayContaining([
-        'Sessions', 'audit_events', 'comments', 'heatsinks', 'interface_materials', 'invitations', 'mail_messages', 'memberships', 'parts',
+        'Sessions', 'audit_events', 'auth_attempts', 'comments', 'heatsinks', 'interface_materials', 'invitations', 'mail_messages', 'memberships', 'parts',
         'password_resets', 'reviews', 'revisions', 'schema_migrations', 'studies', 'team_settings', 'teams', 'users',
       ]));
 
@@ -29,12 +29,13 @@ describe('migrations', () => {
     const after = await db.sequelize.getQueryInterface().showAllTables();
     expect(after).not.toContain('users');
     expect(after).not.toContain('revisions');
-    expect(await migrateUp(db.sequelize)).toEqual(['0001-initial', '0002-team-work', '0003-catalogues', '0004-parts', '0005-team-settings']);
+    expect(await migrateUp(db.sequelize)).toEqual(['0001-initial', '0002-team-work', '0003-catalogues', '0004-parts', '0005-team-settings', '0006-auth-attempts']);
   });
 
   // Column types as each dialect's describeTable names them, by Sequelize data type.
   const columnTypes: Record<string, Record<typeof TEST_DIALECT, RegExp>> = {
     INTEGER: { sqlite: /^INTEGER$/, postgres: /^INTEGER$/ },
+    BIGINT: { sqlite: /^BIGINT$/, postgres: /^BIGINT$/ },
     STRING: { sqlite: /^VARCHAR\(\d+\)$/, postgres: /^CHARACTER VARYING\(\d+\)$/ },
     TEXT: { sqlite: /^TEXT$/, postgres: /^TEXT$/ },
     JSON: { sqlite: /^JSON$/, postgres: /^JSON$/ },

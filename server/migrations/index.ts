@@ -3,6 +3,7 @@ import * as teamWork from './0002-team-work';
 import * as catalogues from './0003-catalogues';
 import * as parts from './0004-parts';
 import * as teamSettings from './0005-team-settings';
+import * as authAttempts from './0006-auth-attempts';
 
 /** Every migration, in order. Add new ones at the end; never edit one that has shipped. */
 export const migrations = [
@@ -11,4 +12,5 @@ export const migrations = [
   { name: '0003-catalogues', ...catalogues },
   { name: '0004-parts', ...parts },
   { name: '0005-team-settings', ...teamSettings },
+  { name: '0006-auth-attempts', ...authAttempts },
 ];

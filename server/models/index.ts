@@ -1,4 +1,5 @@
 import type { Sequelize } from 'sequelize';
+import { AuthAttempt } from './auth-attempt';
 import { AuditEvent } from './audit-event';
 import { Comment } from './comment';
 import { Heatsink } from './heatsink';
@@ -15,7 +16,7 @@ import { Team } from './team';
 import { TeamSetting } from './team-setting';
 import { User } from './user';
 
-const ALL = { User, Team, Membership, Study, Revision, Review, Comment, Invitation, PasswordReset, MailMessage, AuditEvent, Heatsink, InterfaceMaterial, Part, TeamSetting };
+const ALL = { User, Team, Membership, Study, Revision, Review, Comment, Invitation, PasswordReset, MailMessage, AuditEvent, Heatsink, InterfaceMaterial, Part, TeamSetting, AuthAttempt };
 export type Models = typeof ALL;
 
 const fk = (name: string, field: string, allowNull = false) => ({ foreignKey: { name, field, allowNull } });
@@ -54,7 +55,7 @@ export function initModels(sequelize: Sequelize): Models {
   return ALL;
 }
 
-export { AuditEvent, Comment, Heatsink, InterfaceMaterial, Invitation, MailMessage, Membership, Part, PasswordReset, Review, Revision, Study, Team, TeamSetting, User };
+export { AuditEvent, AuthAttempt, Comment, Heatsink, InterfaceMaterial, Invitation, MailMessage, Membership, Part, PasswordReset, Review, Revision, Study, Team, TeamSetting, User };
 export type { Role } from './membership';
 export type { CommentAnchor } from './comment';
 export type { ReviewDecision } from './review';

@@ -9,7 +9,7 @@ import { establishSession } from './session';
 export function accountsRouter({ db, config }: Deps) {
   const router = Router();
 
-  router.post('/', authRateLimit(config.authRateLimit), async (req, res) => {
+  router.post('/', authRateLimit({ db, config }, 'sign-up'), async (req, res) => {
     const input = validateBody(signUpSchema, req.body);
     const view = await signUp(db, input, config.bcryptCost);
     await establishSession(req, view.user.id);

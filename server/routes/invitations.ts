@@ -14,7 +14,7 @@ export function invitationsRouter(deps: Deps) {
   router.get('/:token', async (req, res) => {
     res.json({ invitation: await describeInvitation(deps, String(req.params.token)) });
   });
-  router.post('/:token/accept', authRateLimit(deps.config.authRateLimit), async (req, res) => {
+  router.post('/:token/accept', authRateLimit(deps, 'invitation'), async (req, res) => {
     const input = validateBody(acceptInvitationSchema, req.body);
     const userId = await acceptInvitation(deps, String(req.params.token), input, req.session.userId);
     await establishSession(req, userId);

@@ -7,7 +7,7 @@ import { validateBody } from '../validate';
 
 export function passwordResetsRouter(deps: Deps) {
   const router = Router();
-  router.use(authRateLimit(deps.config.authRateLimit));
+  router.use(authRateLimit(deps, 'password-reset'));
 
   // Same answer whether or not the address has an account.
   router.post('/', async (req, res) => {

@@ -20,7 +20,7 @@ export function establishSession(req: Request, userId: number): Promise<void> {
 export function sessionRouter({ db, config }: Deps) {
   const router = Router();
 
-  router.post('/', authRateLimit(config.authRateLimit), async (req, res) => {
+  router.post('/', authRateLimit({ db, config }, 'sign-in'), async (req, res) => {
     const input = validateBody(signInSchema, req.body);
     const view = await signIn(db, input, config.bcryptCost);
     await establishSession(req, view.user.id);
