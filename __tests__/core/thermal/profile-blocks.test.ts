@@ -5,7 +5,7 @@ import { seededRandom } from '../../helpers/seeded-random';
 
 // runProfile solves a peaks-only run block by block (modes stepped through a block in turn)
 // and a run that records boundaries segment by segment. The two share their arithmetic, so
-// they must report the same peaks; the reference for both is the exact solution itself:
+// they must report the same peaks (to rounding); the reference for both is the exact solution itself:
 // peakInSegment on each segment from the state `advance` reaches (PHYSICS.md §3).
 
 /** A random chain of `devices` junction–case pairs on one sink, and the ambient input last. */
@@ -44,11 +44,13 @@ describe('runProfile in blocks', () => {
     const watch = Array.from({ length: model.nodeCount }, (_, i) => i);
     const blocked = runProfile(model, profile, { watchNodes: watch });
     const recorded = runProfile(model, profile, { watchNodes: watch, recordBoundaries: true });
-    blocked.peaks.forEach((p, w) => {
-      expect(p.valueC).toBe(recorded.peaks[w].valueC);
-      expect(p.timeS).toBe(recorded.peaks[w].timeS);
-    });
+    // The state is stepped by the same arithmetic, so it ends bit for bit the same; a node's
+    // value is summed over its modes in another order, so peaks agree to rounding.
     Array.from(blocked.final).forEach((v, i) => expect(v).toBe(recorded.final[i]));
+    blocked.peaks.forEach((p, w) => {
+      assertInDelta(p.valueC, recorded.peaks[w].valueC, 1e-12 * Math.abs(recorded.peaks[w].valueC), `peak of node ${w}`);
+      assertInDelta(p.timeS, recorded.peaks[w].timeS, 1e-9 * Math.max(1, recorded.peaks[w].timeS), `time of node ${w}`);
+    });
   });
 
   it('finds the exact maximum of every watched node over a random profile', () => {
