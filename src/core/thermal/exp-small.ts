@@ -1,5 +1,8 @@
 import { SMALL_EXP_ARG } from './constants';
 
+// A module-level copy: under CommonJS an imported binding is read through a getter per call.
+const LIMIT = SMALL_EXP_ARG;
+
 // (−1)^k / k!, k = 2…8.
 const C2 = 1 / 2;
 const C3 = -1 / 6;
@@ -16,7 +19,7 @@ const C8 = 1 / 40320;
  * Math.exp, so it is never wrong, only slower.
  */
 export function expSmall(d: number): number {
-  if (!(d >= 0 && d <= SMALL_EXP_ARG)) return Math.exp(-d);
+  if (!(d >= 0 && d <= LIMIT)) return Math.exp(-d);
   const x2 = d * d;
   const x4 = x2 * x2;
   const low = 1 - d + x2 * (C2 + C3 * d);

@@ -1,5 +1,10 @@
 import { RATE_MERGE_REL_TOL, ROOT_MAX_ITERATIONS, ROOT_TIME_REL_TOL } from './constants';
 
+// Module-level copies: under CommonJS an imported binding is read through a getter each time.
+const MERGE_TOL = RATE_MERGE_REL_TOL;
+const MAX_ITERATIONS = ROOT_MAX_ITERATIONS;
+const TIME_TOL = ROOT_TIME_REL_TOL;
+
 /**
  * Root isolation for exponential sums g(τ) = Σ c_k e^(−r_k τ), 0 ≤ r_0 < r_1 < …
  *
@@ -47,7 +52,7 @@ export function resetSum(ws: ExpSumWorkspace): void {
 export function addTerm(ws: ExpSumWorkspace, c: number, r: number): void {
   if (c === 0) return;
   const m = ws.count;
-  if (m > 0 && r - ws.rate[m - 1] <= RATE_MERGE_REL_TOL * r) {
+  if (m > 0 && r - ws.rate[m - 1] <= MERGE_TOL * r) {
     ws.coef[m - 1] += c;
     if (ws.coef[m - 1] === 0) ws.count = m - 1;
     return;
@@ -160,7 +165,7 @@ export function refine(
   eb: number,
   span: number,
 ): number {
-  const tol = ROOT_TIME_REL_TOL * span;
+  const tol = TIME_TOL * span;
   // Slowest rate of each sign: the shift of its group.
   let rp = Infinity;
   let rn = Infinity;
@@ -173,7 +178,7 @@ export function refine(
   const aPositive = ea > 0 || (ea === 0 && eb < 0);
   if (!(rp < Infinity && rn < Infinity)) return 0.5 * (a + b);
   let t = 0.5 * (a + b);
-  for (let it = 0; it < ROOT_MAX_ITERATIONS && b - a > tol; it++) {
+  for (let it = 0; it < MAX_ITERATIONS && b - a > tol; it++) {
     let p = 0;
     let dp = 0;
     let q = 0;

@@ -1,9 +1,13 @@
 import { PEAK_SEARCH_ABS_TOL, PROFILE_BLOCK_SIZE, SMALL_EXP_ARG } from './constants';
 import type { ExpSumWorkspace } from './exp-sum-roots';
-import { expSmall } from './exp-small';
+import { expSmall as importedExpSmall } from './exp-small';
 import { interiorPeak } from './interior-peak';
 import { clusterGaps, type ModeClusters } from './mode-clusters';
 import { mayPeakInside } from './profile-kernel';
+
+// Imported bindings compile to property reads through getters under CommonJS (tsx, jest):
+// a module-level copy keeps the hot loop's call direct.
+const expSmall = importedExpSmall;
 
 /**
  * The peaks-only segment loop, a block of PROFILE_BLOCK_SIZE segments at a time. Modes are

@@ -1,8 +1,12 @@
 import { PEAK_SEARCH_ABS_TOL, PROFILE_CACHE_SIZE, SMALL_EXP_ARG } from './constants';
 import type { ExpSumWorkspace } from './exp-sum-roots';
-import { expSmall } from './exp-small';
+import { expSmall as importedExpSmall } from './exp-small';
 import { interiorPeak } from './interior-peak';
 import { clusterGaps, type ModeClusters } from './mode-clusters';
+
+// Imported bindings compile to property reads through getters under CommonJS (tsx, jest):
+// a module-level copy keeps the hot loop's call direct.
+const expSmall = importedExpSmall;
 
 /**
  * The segment loop, on typed arrays only so that it stays monomorphic. Cache slots hold
