@@ -52,6 +52,8 @@ export type EditorCheckState = EditorCheck & {
   lastGood: EditorCheck['parsed'];
 };
 
+const sameProblems = (a: readonly Problem[], b: readonly Problem[]) => a.length === b.length && a.every((p, i) => p.field === b[i].field && p.reason === b[i].reason);
+
 /** Checks the values a moment after each change (the fields on screen are known by then). */
 export function useEditorCheck(values: EditorValues, fields: RefObject<Map<string, FieldMeta>>, base: EditorValues): EditorCheckState {
   const [state, setState] = useState<EditorCheckState>(() => {
@@ -61,7 +63,8 @@ export function useEditorCheck(values: EditorValues, fields: RefObject<Map<strin
   useEffect(() => {
     const timer = setTimeout(() => {
       const next = checkValues(values, fields.current ?? new Map(), base);
-      setState((prev) => ({ ...next, lastGood: next.parsed ?? prev.lastGood }));
+      // The same findings keep the same list, so the fields reading them do not draw again.
+      setState((prev) => ({ ...next, problems: sameProblems(prev.problems, next.problems) ? prev.problems : next.problems, lastGood: next.parsed ?? prev.lastGood }));
     }, CHECK_DELAY_MS);
     return () => clearTimeout(timer);
   }, [values, fields, base]);

@@ -1,4 +1,4 @@
-import { memo } from 'react';
+import { memo, useMemo } from 'react';
 import { StyleSheet, View } from 'react-native';
 
 import { spacing } from '@/constants/theme';
@@ -6,7 +6,7 @@ import { spacing } from '@/constants/theme';
 import type { Problem } from '../check-document';
 import { SECTION_ORDER, SECTION_TITLES, sectionOf, type SectionKey } from '../field-path';
 import { profileSteps } from '../profile-steps';
-import type { EditorValues } from '../types';
+import type { EditorValues, RawProfile } from '../types';
 import { railPlanSummary, type RawRailPlan } from '../rail-plan-edits';
 import { formatDuration } from '@/features/studies/quantity-format';
 import { AmbientSection } from './ambient-section';
@@ -43,17 +43,22 @@ function summaryOf(key: SectionKey, values: EditorValues): string {
       return doc.railPlan ? railPlanSummary(doc.railPlan as RawRailPlan) : 'None';
     case 'site':
       return siteLifeSummary(doc);
-    case 'profile': {
-      const steps = profileSteps(doc.profile);
-      return `${plural(steps.segmentCount, 'segment', 'segments')}, ${formatDuration(steps.passS)} per pass`;
-    }
+    case 'profile':
+      return profileSummary(doc.profile);
   }
+}
+
+function profileSummary(profile: RawProfile | undefined): string {
+  const steps = profileSteps(profile);
+  return `${plural(steps.segmentCount, 'segment', 'segments')}, ${formatDuration(steps.passS)} per pass`;
 }
 
 /** The editor's sections in order, each collapsible, each counting its problems. */
 export const EditorSections = memo(function EditorSections({ values, problems, open, onToggle, teamId }: EditorSectionsProps) {
   const doc = values.document;
   const deviceIds = (doc.devices ?? []).map((d) => d.id ?? '');
+  // A logged profile holds thousands of segments: its line is counted again only when it changes.
+  const profileLine = useMemo(() => profileSummary(doc.profile), [doc.profile]);
   const body = (key: SectionKey) => {
     switch (key) {
       case 'study':
@@ -78,7 +83,7 @@ export const EditorSections = memo(function EditorSections({ values, problems, o
         <EditorSection
           key={key}
           title={SECTION_TITLES[key]}
-          summary={summaryOf(key, values)}
+          summary={key === 'profile' ? profileLine : summaryOf(key, values)}
           open={open[key]}
           onToggle={() => onToggle(key)}
           problems={problems.filter((p) => sectionOf(p.field) === key).length}
