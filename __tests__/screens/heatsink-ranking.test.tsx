@@ -42,23 +42,23 @@ const CATALOGUE: SinkCandidate[] = [
   { id: '5', name: 'Fan-only cartridge', forcedAir: [{ airSpeedMPerS: 2, rthKPerW: 0.3 }], massKg: 0.4, material: 'aluminium' },
 ];
 
-const setup = rankingSetupFromStudy(parseStudy(DOCUMENT), 'S1');
-
-/** The server's answer, made by the same core the server uses. */
-function ranking(params: Record<string, string>) {
-  const result = rankSinks(setup.setup, CATALOGUE, { sortBy: params.sort as SortKey, airSpeedMPerS: Number(params.airSpeed ?? 0) });
-  return { sinkId: 'S1', candidates: CATALOGUE.length, options: {}, notes: [], result: JSON.parse(JSON.stringify(result)) };
+/** The server's answer, made by the same core the server uses (with the study's own options, e.g. its site). */
+function ranking(document: typeof DOCUMENT, params: Record<string, string>) {
+  const setup = rankingSetupFromStudy(parseStudy(document), 'S1');
+  const options = { ...setup.options, sortBy: params.sort as SortKey, airSpeedMPerS: Number(params.airSpeed ?? 0) };
+  const result = rankSinks(setup.setup, CATALOGUE, options);
+  return { sinkId: 'S1', candidates: CATALOGUE.length, options, notes: [], result: JSON.parse(JSON.stringify(result)) };
 }
 
-function showStudy() {
+function showStudy(document: typeof DOCUMENT = DOCUMENT) {
   const calls: Record<string, string>[] = [];
   routeApi(mockedApi, {
     'GET /session': () => ok(sessionFor('reviewer')),
-    'GET /studies/12': () => ok({ study: { ...STUDIES[1], document: DOCUMENT } }),
+    'GET /studies/12': () => ok({ study: { ...STUDIES[1], document } }),
     'GET /studies/12/ranking': (config) => {
       const params = (config as { params: Record<string, string> }).params;
       calls.push(params);
-      return ok(ranking(params));
+      return ok(ranking(document, params));
     },
     'GET /heatsinks/3': () => ok({ item: LIGHT_CLIP_ROW }),
   });
@@ -109,6 +109,8 @@ describe('heatsink ranking panel', () => {
     expect(within(lightest).getByText('Smallest passing')).toBeVisible();
     expect(within(table).getAllByText('Smallest passing')).toHaveLength(1);
     expect(screen.getByTestId('ranking-answer')).toHaveTextContent(/^Smallest passing sink by mass: Light clip, 300 g/);
+    // At sea level (no site) there is no site line.
+    expect(screen.queryByTestId('ranking-site')).toBeNull();
 
     // Failing and left-out sinks stay folded until asked for, with their margins and reasons.
     fireEvent.press(screen.getByRole('button', { name: 'Show 1 failing sink' }));
@@ -149,5 +151,13 @@ describe('heatsink ranking panel', () => {
     for (const c of calls) expect(Number.isFinite(Number(c.airSpeed))).toBe(true);
     // At 2 m/s the cartridge's own forced-air point applies: 0.3 K/W, and it passes.
     expect(await screen.findByTestId('ranked-5')).toBeVisible();
+  });
+
+  it('says the catalogue was ranked at the study site, with the factor on Rθsa', async () => {
+    showStudy({ ...DOCUMENT, site: { altitudeM: 1800 } } as typeof DOCUMENT);
+    await screen.findByLabelText('Passing heatsinks', undefined, { timeout: 15000 });
+    // Standard atmosphere at 1,800 m: p/p0 ≈ 0.804 (U.S. Standard Atmosphere 1976, from memory);
+    // laminar natural convection h ∝ ρ^(1/2), so Rθsa × 1/sqrt(0.804) ≈ 1.12 (PHYSICS.md §5).
+    expect(screen.getByTestId('ranking-site')).toHaveTextContent(/^Ranked at 1800\sm: Rθsa × 1\.12 \(air pressure 0\.804 of sea level\)\.$/);
   });
 });

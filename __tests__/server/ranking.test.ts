@@ -76,6 +76,21 @@ describe('GET /api/studies/:id/ranking', () => {
     expect(fan.devices[0].peakC).toBeCloseTo(47, 2);
   });
 
+  it('ranks at the study site: the forced-air Rθsa times the altitude factor, in the series sum', async () => {
+    const created = await agent.post('/api/studies').send({ title: 'Rank me high', document: { ...doc, site: { altitudeM: 1800 } } });
+    expect(created.status).toBe(201);
+    const res = await agent.get(`/api/studies/${created.body.study.id}/ranking?airSpeed=2`);
+    expect(res.status).toBe(200);
+    // Standard atmosphere at 1,800 m: p/p0 = (1 − 0.0065·H/288.15)^5.2559, H = 1,799.5 m
+    // geopotential, ≈ 0.8043 (U.S. Standard Atmosphere 1976); forced air h ∝ ρ^(1/2).
+    const factor = 1 / Math.sqrt(Math.pow(1 - (0.0065 * 1799.49) / 288.15, 5.2559));
+    expect(res.body.result.site.altitudeM).toBe(1800);
+    expect(res.body.result.site.forcedRsaFactor).toBeCloseTo(factor, 4);
+    const fan = [...res.body.result.passing, ...res.body.result.failing].find((c: { name: string }) => c.name === 'Fan sink');
+    expect(fan.rsaKPerW).toBeCloseTo(0.3 * factor, 4);
+    expect(fan.devices[0].peakC).toBeCloseTo(25 + 20 * (0.5 + 0.3 + 0.3 * factor), 2);
+  });
+
   it('ranks a study whose input comes from a rail plan, on the taps its evaluation selected', async () => {
     const lab = JSON.parse(fs.readFileSync(path.join(__dirname, '../../examples/lab-supply-two-tap.json'), 'utf8'));
     const created = await agent.post('/api/studies').send({ title: 'Lab supply', document: lab });

@@ -42,4 +42,6 @@ export { flatPlateAtRise, flatPlateAtPower } from './flat-plate';
 export type { FlatPlateGeometry, FlatPlateEstimate } from './flat-plate';
 export { riseAtPower } from './solve-rise';
 export { rankingSetupFromStudy, MAX_RANKING_SEGMENTS } from './ranking-from-study';
+export { siteDerating, derateCandidate } from './site-derating';
+export type { RankingSite, SiteDerating } from './site-derating';
 export type { StudyRanking } from './ranking-from-study';

@@ -4,6 +4,7 @@ import { checkFinite, checkNonNegative, checkObject } from './check';
 import { CONVECTION_REL_TOL, PEAK_TOLERANCE_K } from './constants';
 import { prepareRanking, type PreparedRanking, type RankingSetup } from './ranking-setup';
 import { scanProfile } from './scan-profile';
+import { derateCandidate, siteDerating, type RankingSite, type SiteDerating } from './site-derating';
 import { createScanWorkspace } from './scan-workspace';
 import { simulateCandidate } from './simulate-candidate';
 import { steadyMargin, steadyRequirement, type SteadyRequirement } from './steady-answer';
@@ -11,8 +12,11 @@ import { steadyMargin, steadyRequirement, type SteadyRequirement } from './stead
 export type SortKey = 'mass' | 'volume' | 'price';
 export const SORT_KEYS: readonly SortKey[] = ['mass', 'volume', 'price'];
 
-/** A what-if: still air (0) or an air speed, m/s; the ambient and the margin instead of the setup's. */
-export type RankingOptions = { airSpeedMPerS?: number; ambientC?: number; marginK?: number; sortBy?: SortKey };
+/**
+ * A what-if: still air (0) or an air speed, m/s; the ambient and the margin instead of the
+ * setup's. site: every candidate's Rθsa derated for that altitude (none: sea level).
+ */
+export type RankingOptions = { airSpeedMPerS?: number; ambientC?: number; marginK?: number; sortBy?: SortKey; site?: RankingSite };
 
 export type DevicePeak = { id: string; peakC: number; peakTimeS: number; targetC: number; marginK: number };
 
@@ -25,6 +29,8 @@ export type CandidateResult = {
   /** Rθsa the profile was simulated with, K/W, and where it came from. */
   rsaKPerW?: number;
   rsaSource?: 'natural' | 'forced';
+  /** With a site: the factor its catalogue Rθsa was multiplied by (already in rsaKPerW). */
+  siteFactor?: number;
   /** Time-averaged sink rise over the profile, K. */
   meanRiseK?: number;
   runs?: number;
@@ -44,6 +50,8 @@ export type CandidateResult = {
 
 export type RankingResult = {
   scenario: { airSpeedMPerS: number; ambientC: number; marginK: number; sortBy: SortKey };
+  /** With a site: the altitude every candidate was ranked at and its factor on Rθsa. */
+  site?: SiteDerating;
   /** Required Rθsa for the steady worst case. */
   required: SteadyRequirement;
   /** Passing (by sortBy), then failing (closest first), then excluded. */
@@ -102,6 +110,7 @@ function rankChecked(prep: PreparedRanking, candidates: CheckedCandidate[], opti
   const marginK = opts.marginK === undefined ? prep.marginK : checkNonNegative(opts.marginK, 'options.marginK');
   const sortBy = (opts.sortBy ?? 'mass') as SortKey;
   if (!SORT_KEYS.includes(sortBy)) throw new RangeError(`options.sortBy: must be one of ${SORT_KEYS.join(', ')}, got ${JSON.stringify(opts.sortBy)}`);
+  const site = opts.site === undefined ? undefined : siteDerating(opts.site as RankingSite);
 
   const m = prep.devices.length;
   const S = prep.durations.length;
@@ -118,7 +127,9 @@ function rankChecked(prep: PreparedRanking, candidates: CheckedCandidate[], opti
   let profileRuns = 0;
   let interiorSearches = 0;
 
-  const results = candidates.map((c): CandidateResult => {
+  const results = candidates.map((given): CandidateResult => {
+    const derated = site ? derateCandidate(given, site) : undefined;
+    const c = derated ? derated.candidate : given;
     const base: CandidateResult = {
       id: c.id,
       status: 'excluded',
@@ -139,6 +150,7 @@ function rankChecked(prep: PreparedRanking, candidates: CheckedCandidate[], opti
     const mode = candidateRsaMode(c, airSpeed);
     if (mode.mode === 'none') return { ...base, reason: mode.reason };
     if (mode.note) base.notes.push(mode.note);
+    if (derated) base.siteFactor = mode.mode === 'natural' ? derated.naturalFactor : derated.forcedFactor;
     let sim;
     try {
       sim = simulateCandidate(prep, scan, c, mode, ws);
@@ -194,11 +206,20 @@ function rankChecked(prep: PreparedRanking, candidates: CheckedCandidate[], opti
     smallest,
     steadyChoice,
     thermalMassGain,
-    assumptions: ASSUMPTIONS,
+    assumptions: site ? [...ASSUMPTIONS, siteAssumption(site)] : ASSUMPTIONS,
     stats: { candidates: candidates.length, profileRuns, interiorSearches },
   };
+  if (site) result.site = site;
   if (passing.length === 0) result.message = noPassMessage(required, failing, excluded);
   return result;
+}
+
+function siteAssumption(site: SiteDerating): string {
+  return (
+    `Every candidate is ranked at the site, ${site.altitudeM} m (standard-atmosphere pressure ratio ${site.pressureRatio.toFixed(3)}, ` +
+    `radiation share ${site.radiationShare}): its still-air reference Rθsa and forced-air points are multiplied by 1/(s + (1 − s)·h/h0), ` +
+    `h ∝ ρ^(2n) in still air, ρ^(1/2) in forced air.`
+  );
 }
 
 function sortValue(c: CheckedCandidate, key: SortKey): number | null {

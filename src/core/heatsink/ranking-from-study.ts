@@ -57,6 +57,8 @@ export function rankingSetupFromStudy(doc: StudyDocument, sinkId: string, powers
 
   const options: RankingOptions = {};
   if (sink.forcedAir) options.airSpeedMPerS = sink.forcedAir.airSpeedMPerS;
+  // The study's site derates every candidate as it derates the study's own sinks.
+  if (doc.site) options.site = { altitudeM: doc.site.altitudeM, radiationShare: doc.site.radiationShare };
   return {
     setup: {
       devices: devices.map((d) => ({

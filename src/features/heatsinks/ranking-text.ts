@@ -1,5 +1,5 @@
 import type { SortKey } from '@/core/heatsink';
-import { formatQuantity } from '@/features/studies/quantity-format';
+import { formatNumber, formatQuantity } from '@/features/studies/quantity-format';
 
 import { formatMass, formatPrice } from './heatsink-format';
 import type { RankedSink, RankingJson } from './ranking-types';
@@ -69,4 +69,12 @@ export function thermalMassSentence(result: RankingJson): string | null {
   if (!g) return null;
   if (g.fraction <= 0.005) return 'Thermal mass gains nothing here: the steady answer already picks the smallest passing sink.';
   return `Thermal mass allows a sink ${Math.round(g.fraction * 100)} % ${SMALLER[g.key]} (${sortValueText(g.key, g.smallest)} instead of ${sortValueText(g.key, g.steady)}).`;
+}
+
+/** "Ranked at 1800 m: Rθsa × 1.12 (air pressure 0.804 of sea level)." or null at sea level (no site). */
+export function siteSentence(result: RankingJson): string | null {
+  const site = result.site;
+  if (!site) return null;
+  const radiation = site.radiationShare > 0 ? `, ${Math.round(site.radiationShare * 100)} % of each rating taken as radiation` : '';
+  return `Ranked at ${formatQuantity(site.altitudeM, 'm')}: Rθsa × ${site.rsaFactor.toFixed(2)} (air pressure ${formatNumber(site.pressureRatio)} of sea level${radiation}).`;
 }

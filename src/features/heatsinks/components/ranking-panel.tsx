@@ -8,7 +8,7 @@ import { formatQuantity } from '@/features/studies/quantity-format';
 
 import { useSinkRanking } from '../api';
 import { checkRankingForm, initialRankingForm, rankingDefaults } from '../ranking-form';
-import { smallestSentence, steadySentence, thermalMassSentence } from '../ranking-text';
+import { siteSentence, smallestSentence, steadySentence, thermalMassSentence } from '../ranking-text';
 import type { RankingResponse } from '../ranking-types';
 import { useDebouncedValue } from '../use-debounced-value';
 import { RankingControls } from './ranking-controls';
@@ -24,6 +24,7 @@ function Answer({ data }: { data: RankingResponse }) {
   const [showNotes, setShowNotes] = useState(false);
   const r = data.result;
   const gain = thermalMassSentence(r);
+  const site = siteSentence(r);
   const notes = [...data.notes, ...r.assumptions];
   const s = r.scenario;
   return (
@@ -31,6 +32,11 @@ function Answer({ data }: { data: RankingResponse }) {
       <Text variant="caption" tone="muted">
         {`${data.candidates} catalogue ${data.candidates === 1 ? 'sink' : 'sinks'} in the slot of ${data.sinkId}, ${s.airSpeedMPerS > 0 ? `air at ${formatQuantity(s.airSpeedMPerS, 'm/s')}` : 'still air'}, ambient ${formatQuantity(s.ambientC, '°C')}, margin ${formatQuantity(s.marginK, 'K')}.`}
       </Text>
+      {site ? (
+        <Text variant="caption" tone="muted" testID="ranking-site">
+          {site}
+        </Text>
+      ) : null}
       <View testID="ranking-answer" style={[styles.box, r.smallest ? styles.pass : styles.fail]}>
         <Text variant="bodyStrong" style={r.smallest ? styles.passText : styles.failText}>
           {smallestSentence(r)}
