@@ -24,6 +24,12 @@ describe('loadConfig', () => {
     expect(problems).toMatch(/BCRYPT_COST must be at least 10/);
   });
 
+  it('counts sign-in attempts in the database unless AUTH_RATE_LIMIT_STORE says memory, and names a bad value', () => {
+    expect(loadConfig({ NODE_ENV: 'test' }).authRateLimitStore).toBe('database');
+    expect(loadConfig({ NODE_ENV: 'test', AUTH_RATE_LIMIT_STORE: 'memory' }).authRateLimitStore).toBe('memory');
+    expect(() => loadConfig({ NODE_ENV: 'test', AUTH_RATE_LIMIT_STORE: 'redis' })).toThrow('AUTH_RATE_LIMIT_STORE must be database or memory (got "redis")');
+  });
+
   it('rejects a database URL of another kind', () => {
     expect(() => loadConfig({ NODE_ENV: 'test', DATABASE_URL: 'mysql://x' })).toThrow(/DATABASE_URL/);
   });
