@@ -1,4 +1,4 @@
-import { useMemo, useState } from 'react';
+import { memo, useDeferredValue, useMemo, useState } from 'react';
 import { StyleSheet, View } from 'react-native';
 
 import { HeatCurvesChart } from '@/charts/heat-curves-chart';
@@ -34,9 +34,11 @@ export type StudyResultsProps = {
 
 type SolvedProps = { result: StudyResult; mains: string | null; onPickTime?: (timeS: number) => void };
 
+/**
+ * The verdict follows each result at once; the curves, tables and panels below follow a moment
+ * later (a deferred render React may interrupt), so the verdict and the fields never wait on them.
+ */
 function Solved({ result, mains, onPickTime }: SolvedProps) {
-  const wide = useIsWide();
-  const [cursorS, setCursorS] = useState<number | null>(null);
   const verdict = useMemo(() => {
     const v = studyVerdict(result);
     const soa = soaSummary(result.soa);
@@ -44,6 +46,18 @@ function Solved({ result, mains, onPickTime }: SolvedProps) {
   }, [result]);
   // Warnings the SOA and rail-plan panels show in full are not repeated above the curves.
   const warnings = useMemo(() => result.warnings.filter((w) => !shownElsewhere(w, result.soa, Boolean(result.railPlan))), [result]);
+  const details = useDeferredValue(result);
+  return (
+    <>
+      <VerdictPanel verdict={verdict} warnings={warnings} />
+      <Details result={details} mains={mains} onPickTime={onPickTime} />
+    </>
+  );
+}
+
+const Details = memo(function Details({ result, mains, onPickTime }: SolvedProps) {
+  const wide = useIsWide();
+  const [cursorS, setCursorS] = useState<number | null>(null);
   const devices = useMemo(() => Object.values(result.devices), [result]);
   const hasSoa = Object.keys(result.soa).length > 0;
   const planSink = result.railPlan ? result.sinks[result.devices[result.railPlan.device]?.sink ?? ''] : undefined;
@@ -60,7 +74,6 @@ function Solved({ result, mains, onPickTime }: SolvedProps) {
 
   return (
     <>
-      <VerdictPanel verdict={verdict} warnings={warnings} />
       <ResultSection title="Heat curves">
         <HeatCurvesChart
           result={result}
@@ -110,10 +123,10 @@ function Solved({ result, mains, onPickTime }: SolvedProps) {
       <ResultsCaution hotSinks={Object.values(result.sinks)} mains={mains} />
     </>
   );
-}
+});
 
 /** The study's answer, solved in the client: verdict, heat curves, per-device and per-sink peaks, events. */
-export function StudyResults({ document, onPickTime, seriesPoints }: StudyResultsProps) {
+export const StudyResults = memo(function StudyResults({ document, onPickTime, seriesPoints }: StudyResultsProps) {
   const state = useStudyResult(document, seriesPoints);
   const mains = useMemo(() => mainsHint(document), [document]);
   if (state.kind === 'empty') return null;
@@ -127,7 +140,7 @@ export function StudyResults({ document, onPickTime, seriesPoints }: StudyResult
       {state.kind === 'ok' ? <Solved result={state.result} mains={mains} onPickTime={onPickTime} /> : null}
     </Card>
   );
-}
+});
 
 const styles = StyleSheet.create({
   card: { gap: spacing.md },

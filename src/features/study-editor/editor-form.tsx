@@ -1,6 +1,6 @@
 import { useQueryClient } from '@tanstack/react-query';
 import { useFormik } from 'formik';
-import { useEffect, useMemo, useRef, useState } from 'react';
+import { memo, useCallback, useEffect, useMemo, useRef, useState } from 'react';
 import { ScrollView, StyleSheet, View } from 'react-native';
 
 import { errorMessage, fieldErrors } from '@/api';
@@ -118,6 +118,8 @@ export function EditorForm({ study }: EditorFormProps) {
     return () => clearTimeout(timer);
   }, [values, dirty, offer, baseVersion, study.id]);
 
+  // A stable toggle lets the memoised sections skip renders that change nothing in them.
+  const toggleSection = useCallback((k: SectionKey) => setOpen((o) => ({ ...o, [k]: !o[k] })), []);
   const openSection = (field: string) => setOpen((o) => ({ ...o, [sectionOf(field)]: true }));
 
   const send = (sent: EditorValues, base: number) => {
@@ -227,7 +229,7 @@ export function EditorForm({ study }: EditorFormProps) {
     </View>
   );
 
-  const sections = <EditorSections values={values} problems={problems} open={open} onToggle={(k) => setOpen((o) => ({ ...o, [k]: !o[k] }))} teamId={study.teamId} />;
+  const sections = <EditorSections values={values} problems={problems} open={open} onToggle={toggleSection} teamId={study.teamId} />;
   const stale = check.parsed === null;
 
   return (
@@ -258,14 +260,15 @@ export function EditorForm({ study }: EditorFormProps) {
   );
 }
 
-function LiveResults({ raw, stale }: { raw: RawDocument | null; stale: boolean }) {
+/** Drawn again only when the checked document or its staleness changes, not on each keystroke. */
+const LiveResults = memo(function LiveResults({ raw, stale }: { raw: RawDocument | null; stale: boolean }) {
   return (
     <View style={styles.live}>
       {stale ? <InlineAlert tone="info" message={raw ? 'Results are from the last inputs without problems; fix the problems listed to update them.' : 'Results appear once the inputs have no problems.'} /> : null}
       {raw ? <StudyResults document={raw} seriesPoints={LIVE_SERIES_POINTS} /> : null}
     </View>
   );
-}
+});
 
 /** On a phone the full results (chart, tables) open on request; the verdict line stays above. */
 function PhoneResults({ open, onToggle, raw, stale }: { open: boolean; onToggle: () => void; raw: RawDocument | null; stale: boolean }) {

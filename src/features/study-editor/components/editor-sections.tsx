@@ -56,7 +56,9 @@ function profileSummary(profile: RawProfile | undefined): string {
 /** The editor's sections in order, each collapsible, each counting its problems. */
 export const EditorSections = memo(function EditorSections({ values, problems, open, onToggle, teamId }: EditorSectionsProps) {
   const doc = values.document;
-  const deviceIds = (doc.devices ?? []).map((d) => d.id ?? '');
+  const idsKey = JSON.stringify((doc.devices ?? []).map((d) => d.id ?? ''));
+  // The same ids keep the same list, so the memoised sections below skip unrelated edits.
+  const deviceIds = useMemo(() => JSON.parse(idsKey) as string[], [idsKey]);
   // A logged profile holds thousands of segments: its line is counted again only when it changes.
   const profileLine = useMemo(() => profileSummary(doc.profile), [doc.profile]);
   const body = (key: SectionKey) => {

@@ -1,4 +1,4 @@
-import { useMemo, useState } from 'react';
+import { memo, useMemo, useState } from 'react';
 import { StyleSheet, View } from 'react-native';
 
 import { Button, Chip, Text } from '@/components/ui';
@@ -30,7 +30,7 @@ function heldLevels(items: readonly RawItem[]): { vin: string; vout: string } {
 export type ProfileSectionProps = { profile: RawProfile | undefined; deviceIds: string[]; railPlan: boolean };
 
 /** The load over time: segments and groups, helpers that append to them, passes and periodic state. */
-export function ProfileSection({ profile = {}, deviceIds, railPlan }: ProfileSectionProps) {
+export const ProfileSection = memo(function ProfileSection({ profile = {}, deviceIds, railPlan }: ProfileSectionProps) {
   const { set, update } = useEditorActions();
   const [helper, setHelper] = useState<Helper>(null);
   const ids = deviceIds.join(',');
@@ -92,7 +92,7 @@ export function ProfileSection({ profile = {}, deviceIds, railPlan }: ProfileSec
       </View>
     </View>
   );
-}
+});
 
 const styles = StyleSheet.create({
   box: { gap: spacing.md },
