@@ -8,6 +8,7 @@ import { Text } from '@/components/ui';
 import { chartColor, color, fontFamily, spacing } from '@/constants/theme';
 
 import { PLOT_MARGIN, tickCounts } from './plot-frame';
+import { profileEnvelope } from './profile-envelope';
 import { LABEL_SIZE } from './plot-labels';
 import { timeTicks } from './time-axis';
 
@@ -42,15 +43,28 @@ export function ProfileChart({ series, unit, durationS, height = 180, label }: P
   const paths = useMemo(
     () =>
       series.map((s, i) => {
-        // A step line needs a closing point at the end of the last step.
-        const pts = s.steps.flatMap((st, k) => (k === s.steps.length - 1 ? [[st.startS, st.value], [st.endS, st.value]] : [[st.startS, st.value]]));
-        const d = line<number[]>()
+        const stroke = chartColor.devices[i % chartColor.devices.length];
+        const step = line<number[]>()
           .x((p) => frame.x(p[0]))
           .y((p) => frame.y(p[1]))
-          .curve(curveStepAfter)(pts);
-        return { key: s.key, label: s.label, d: d ?? '', stroke: chartColor.devices[i % chartColor.devices.length] };
+          .curve(curveStepAfter);
+        // More steps than pixels: one bucket per pixel, drawn as the band from its lowest to its
+        // highest value, so every step's peak still shows.
+        const buckets = Math.max(1, Math.floor(frame.right - frame.left));
+        if (s.steps.length > buckets) {
+          const env = profileEnvelope(s.steps, durationS, buckets);
+          const top = env.flatMap((b) => [[b.startS, b.max], [b.endS, b.max]]);
+          const bottom = env.flatMap((b) => [[b.startS, b.min], [b.endS, b.min]]).reverse();
+          const linear = line<number[]>()
+            .x((p) => frame.x(p[0]))
+            .y((p) => frame.y(p[1]));
+          return { key: s.key, label: s.label, d: linear(top) ?? '', band: `${linear([...top, ...bottom]) ?? ''}Z`, stroke };
+        }
+        // A step line needs a closing point at the end of the last step.
+        const pts = s.steps.flatMap((st, k) => (k === s.steps.length - 1 ? [[st.startS, st.value], [st.endS, st.value]] : [[st.startS, st.value]]));
+        return { key: s.key, label: s.label, d: step(pts) ?? '', band: null, stroke };
       }),
-    [series, frame],
+    [series, frame, durationS],
   );
 
   const counts = tickCounts(frame);
@@ -83,6 +97,9 @@ export function ProfileChart({ series, unit, durationS, height = 180, label }: P
           </SvgText>
           <Line x1={frame.left} x2={frame.right} y1={frame.bottom} y2={frame.bottom} stroke={chartColor.axis} strokeWidth={1} />
           <Line x1={frame.left} x2={frame.left} y1={frame.top} y2={frame.bottom} stroke={chartColor.axis} strokeWidth={1} />
+          {paths.map((p) =>
+            p.band ? <Path key={`band-${p.key}`} d={p.band} fill={p.stroke} fillOpacity={0.25} stroke="none" /> : null,
+          )}
           {paths.map((p) => (
             <Path key={p.key} d={p.d} fill="none" stroke={p.stroke} strokeWidth={1.8} strokeLinejoin="round" />
           ))}

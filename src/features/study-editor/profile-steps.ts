@@ -14,8 +14,8 @@ export type ProfileSteps = {
   truncated: boolean;
 };
 
-/** Steps drawn at most: a chart of a few hundred pixels shows no more. */
-export const MAX_DRAWN_STEPS = 4000;
+/** Steps kept for the chart at most (it draws more than a few hundred as a per-pixel band). */
+export const MAX_DRAWN_STEPS = 100_000;
 const MAX_COUNTED = 10_000_000;
 
 const num = (v: Num | undefined): number | null => (typeof v === 'number' && Number.isFinite(v) ? v : null);
