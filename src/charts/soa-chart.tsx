@@ -1,5 +1,5 @@
 import { line } from 'd3-shape';
-import { useMemo, useState } from 'react';
+import { memo, useMemo, useState } from 'react';
 import { Platform, StyleSheet, View, type LayoutChangeEvent, type PointerEvent, type ViewStyle } from 'react-native';
 import Svg, { Circle, ClipPath, Defs, G, Path, Rect, Text as SvgText } from 'react-native-svg';
 
@@ -47,12 +47,25 @@ const segmentPath = (frame: LogFrame, points: readonly SoaChartPointValue[]) =>
     .x((p) => frame.x(p.vceV))
     .y((p) => frame.y(p.icA))(points.filter((p) => p.vceV > 0 && p.icA > 0)) ?? '';
 
-/** Circles of radius r at the points (two arcs each), as one path. */
-const circlesPath = (frame: LogFrame, points: readonly SoaChartPointValue[], r: number) =>
-  points
-    .filter((p) => p.vceV > 0 && p.icA > 0)
-    .map((p) => `M${(frame.x(p.vceV) - r).toFixed(1)},${frame.y(p.icA).toFixed(1)}a${r},${r} 0 1,0 ${2 * r},0a${r},${r} 0 1,0 ${-2 * r},0`)
-    .join('');
+/** The operating points, worst one ringed; hundreds of them, so drawn again only when the frame or the points change (not on hover). */
+const PointMarkers = memo(function PointMarkers({ frame, points }: { frame: LogFrame; points: readonly SoaChartPoint[] }) {
+  return (
+    <>
+      {points.map((p, i) =>
+        p.vceV > 0 && p.icA > 0 ? (
+          p.worst ? (
+            <G key={`p${i}`}>
+              <Circle cx={frame.x(p.vceV)} cy={frame.y(p.icA)} r={8} stroke={color.danger} fill="none" strokeWidth={1.5} />
+              <Circle cx={frame.x(p.vceV)} cy={frame.y(p.icA)} r={4} fill={color.danger} />
+            </G>
+          ) : (
+            <Circle key={`p${i}`} cx={frame.x(p.vceV)} cy={frame.y(p.icA)} r={3.5} stroke={markerColours.stroke} fill={markerColours.fill} strokeWidth={1.5} />
+          )
+        ) : null,
+      )}
+    </>
+  );
+});
 
 /**
  * Safe operating area on log-log axes: Ic against Vce, each boundary's segments named by the
@@ -156,16 +169,7 @@ export function SoaChart({ boundaries, points = [], onPickPoint, label, height =
                 {l.text}
               </SvgText>
             ))}
-            {/* The ordinary points as one path: hundreds of them redraw as one element. */}
-            <Path d={circlesPath(frame, points.filter((p) => !p.worst), 3.5)} stroke={markerColours.stroke} fill={markerColours.fill} strokeWidth={1.5} />
-            {points.map((p, i) =>
-              p.worst && p.vceV > 0 && p.icA > 0 ? (
-                <G key={`p${i}`}>
-                  <Circle cx={frame.x(p.vceV)} cy={frame.y(p.icA)} r={8} stroke={color.danger} fill="none" strokeWidth={1.5} />
-                  <Circle cx={frame.x(p.vceV)} cy={frame.y(p.icA)} r={4} fill={color.danger} />
-                </G>
-              ) : null,
-            )}
+            <PointMarkers frame={frame} points={points} />
             {hoverV !== null && hoverV >= frame.x.domain()[0] && hoverV <= frame.x.domain()[1] ? (
               <Path d={`M${frame.x(hoverV)},${frame.top}V${frame.bottom}`} stroke={color.ink} strokeWidth={1} strokeDasharray="3 3" />
             ) : null}
