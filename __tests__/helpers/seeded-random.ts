@@ -1,11 +1,6 @@
-/** Seeded pseudo-random numbers in [0, 1): mulberry32 (Tommy Ettinger, public domain; from memory). */
+import { mulberry32 } from '@/core/tolerance/random';
+
+/** Seeded pseudo-random numbers in [0, 1) for tests: the core's mulberry32 generator. */
 export function seededRandom(seed: number): () => number {
-  let a = seed >>> 0;
-  return () => {
-    a = (a + 0x6d2b79f5) >>> 0;
-    let t = a;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
+  return mulberry32(seed);
 }
