@@ -48,4 +48,15 @@ describe.each([
     expect(await page.getByText(/Results are estimates from datasheet values/).count()).toBe(1);
     expectPng(await screenshot(page, viewport, 'study'));
   });
+
+  it('shows the life, touch and site panel of the on-board regulator demo', async () => {
+    const { page } = browser;
+    const onboard = (await apiStudies(page)).find((study) => /24 V/.test(study.title) && DEMO_TITLE.test(study.title));
+    expect(onboard).toBeDefined();
+    await page.goto(`${baseUrl()}/studies/${onboard!.id}`);
+    const heading = page.getByRole('heading', { name: 'Life, touch and site' });
+    await heading.waitFor({ timeout: 60_000 });
+    await heading.scrollIntoViewIfNeeded();
+    expectPng(await screenshot(page, viewport, 'study-life-touch-site'));
+  });
 });
