@@ -93,7 +93,7 @@ describe('tolerance panel', () => {
     const expected = runTolerance(parseStudy(DOCUMENT), bodies[0] as ToleranceSpec);
     const t = expected.anyExceedTarget;
     expect(t.count).toBeGreaterThan(0);
-    expect(within(answer).getByText(new RegExp(`^A junction passed its target in ${t.count} of 400 runs`))).toBeVisible();
+    expect(within(answer).getByText(new RegExp(`^A junction went above its target in ${t.count} of 400 runs`))).toBeVisible();
     expect(within(answer).getByText(/400 runs, seed 7, solved on the server/)).toBeVisible();
   });
 

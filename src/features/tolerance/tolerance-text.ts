@@ -23,8 +23,8 @@ export function headline(r: ToleranceResult): string {
     return `Worst of ${runs}: ${w.device} peaks at ${celsius(w.peakC)}, ${margin}, with ${w.words}.`;
   }
   const t = r.anyExceedTarget;
-  if (t.count === 0) return `No junction passed its target in ${runs}; the chance per build is below ${pct(t.high)} (95 % upper bound).`;
-  return `A junction passed its target in ${t.count.toLocaleString('en')} of ${runs}: ${probabilityText(t)}.`;
+  if (t.count === 0) return `No junction went above its target in ${runs}; the chance per build is below ${pct(t.high)} (95 % upper bound).`;
+  return `A junction went above its target in ${t.count.toLocaleString('en')} of ${runs}: ${probabilityText(t)}.`;
 }
 
 export const METHOD_TEXT: Record<ToleranceResult['sensitivity']['method'], string> = {
