@@ -165,11 +165,27 @@ describe('study report', () => {
     expect(within(cautions).getByText(/thermocouple on the case, or the electrical method of JEDEC JESD51-1/)).toBeVisible();
     expect(within(cautions).getByText(/Surfaces above about 60 °C can burn on contact/)).toBeVisible();
     expect(within(cautions).getByText(/defer to IEC 62368-1 and to local codes/)).toBeVisible();
-    expect(within(cautions).getByText(/mains wiring follows local electrical codes and is done by qualified people/)).toBeVisible();
+    // No mains flag and no mention of the mains in the text: no mains line.
+    expect(within(cautions).queryByText(/mains wiring/)).toBeNull();
 
     const comment = await screen.findByTestId('report-comment-5');
     expect(within(comment).getByText('Pinned at 38 s')).toBeVisible();
     expect(within(comment).getByText(COMMENTS[0].body)).toBeVisible();
+  });
+
+  // PHYSICS.md §7: mains wiring follows local electrical codes and is done by qualified people.
+  it('gives the mains-wiring caution for a study flagged mains-fed', async () => {
+    openReport(studyAt('draft', 3, { document: { ...DOCUMENT, mainsFed: true } }));
+    const caution = await screen.findByTestId('report-mains-caution');
+    expect(caution).toHaveTextContent(/fed from the mains: its mains wiring follows the local electrical codes and is done by qualified people/);
+    expect(screen.queryByTestId('report-mains-hint')).toBeNull();
+  });
+
+  it('prompts for the mains flag when it is absent and the text names a transformer', async () => {
+    openReport(studyAt('draft', 3, { document: { ...DOCUMENT, description: 'Demo data: fed from a transformer.' } }));
+    const hint = await screen.findByTestId('report-mains-hint');
+    expect(hint).toHaveTextContent(/mentions a transformer; tick 'Mains-fed'/);
+    expect(screen.queryByTestId('report-mains-caution')).toBeNull();
   });
 
   it('names the field at fault when the saved document cannot be read, and still gives the cautions', async () => {

@@ -123,11 +123,30 @@ describe('rail-plan panel', () => {
 describe('cautions', () => {
   beforeEach(() => jest.clearAllMocks());
 
-  it('adds the mains-wiring note when the study says it is fed from a mains transformer', async () => {
+  // PHYSICS.md §7: mains wiring follows local electrical codes and is done by qualified people.
+  it('adds the mains-wiring caution when the study is flagged mains-fed', async () => {
+    showStudy({ ...example('lab-supply-two-tap'), mainsFed: true });
+    expect(await screen.findByTestId('mains-caution', undefined, { timeout: 15000 })).toHaveTextContent(
+      /fed from the mains: its mains wiring follows the local electrical codes and is done by qualified people/,
+    );
+    expect(screen.queryByTestId('mains-hint')).toBeNull();
+    expect(screen.getByText(/confirm the margins by measurement/)).toBeVisible();
+  });
+
+  it('only prompts for the flag when the text mentions a mains transformer and the flag is absent', async () => {
     const doc = example('lab-supply-two-tap');
     showStudy({ ...doc, description: 'Demo data: fed from a 2 × 24 V mains transformer.' });
-    expect(await screen.findByTestId('mains-caution', undefined, { timeout: 15000 })).toHaveTextContent(/qualified people/);
-    expect(screen.getByText(/confirm the margins by measurement/)).toBeVisible();
+    expect(await screen.findByTestId('mains-hint', undefined, { timeout: 15000 })).toHaveTextContent(
+      /mentions mains; tick 'Mains-fed' in the study fields if it is/,
+    );
+    expect(screen.queryByTestId('mains-caution')).toBeNull();
+  });
+
+  it('says nothing of the mains when the flag is false, whatever the text says', async () => {
+    showStudy({ ...example('lab-supply-two-tap'), mainsFed: false, description: 'Demo data: a mains transformer.' });
+    await screen.findByTestId('rail-plan-panel', undefined, { timeout: 15000 });
+    expect(screen.queryByTestId('mains-caution')).toBeNull();
+    expect(screen.queryByTestId('mains-hint')).toBeNull();
   });
 
   it('leaves the mains note out for external adapters', async () => {

@@ -58,6 +58,34 @@ describe('study editor fields', () => {
     expect(await screen.findByText('Saved as version 4')).toBeVisible();
   });
 
+  it('ticks Mains-fed into the saved document, and unticking leaves the field out', async () => {
+    const puts: { document: Record<string, unknown> }[] = [];
+    routeApi(mockedApi, {
+      'GET /session': () => ok(sessionAs('designer')),
+      'GET /studies/21': () => ok({ study: editableStudy() }),
+      'PUT /studies/21': (body) => {
+        puts.push(body as { document: Record<string, unknown> });
+        return ok({ study: { ...editableStudy(4 + puts.length - 1), document: (body as { document: unknown }).document } });
+      },
+    });
+    await openEditor();
+    openSection(/^Study and margin/);
+    const box = screen.getByRole('checkbox', { name: 'Mains-fed' });
+    expect(box).not.toBeChecked();
+    fireEvent.press(box);
+    expect(screen.getByRole('checkbox', { name: 'Mains-fed' })).toBeChecked();
+    fireEvent.press(screen.getByRole('button', { name: 'Save' }));
+    await waitFor(() => expect(puts).toHaveLength(1));
+    // docs/study-format.md, top level: mainsFed is true, false or absent.
+    expect(puts[0].document.mainsFed).toBe(true);
+
+    await screen.findByText('Saved as version 4');
+    fireEvent.press(screen.getByRole('checkbox', { name: 'Mains-fed' }));
+    fireEvent.press(screen.getByRole('button', { name: 'Save' }));
+    await waitFor(() => expect(puts).toHaveLength(2));
+    expect('mainsFed' in puts[1].document).toBe(false);
+  });
+
   it('shows the reason at the field for text that is not a quantity and for a value the study parser refuses', async () => {
     routeApi(mockedApi, {
       'GET /session': () => ok(sessionAs('designer')),

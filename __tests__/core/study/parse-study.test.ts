@@ -123,3 +123,21 @@ describe('parseStudy refuses', () => {
     expect(error.message).toBe('devices[1].package.terms[0].tauS: must be greater than zero, got -0.002 s');
   });
 });
+
+describe('parseStudy mainsFed', () => {
+  // docs/study-format.md, top level: `mainsFed` is true, false or absent (not stated).
+  it('keeps true and false as given', () => {
+    expect(parseStudy({ ...contractStudy(), mainsFed: true }).mainsFed).toBe(true);
+    expect(parseStudy({ ...contractStudy(), mainsFed: false }).mainsFed).toBe(false);
+  });
+
+  it('leaves it out when the file does not state it', () => {
+    expect('mainsFed' in parseStudy(contractStudy())).toBe(false);
+  });
+
+  it('refuses anything but true or false, naming the field', () => {
+    const error = errorOf(contractStudy, (d) => (d.mainsFed = 'yes'));
+    expect(error).toBeInstanceOf(TypeError);
+    expect(error.message).toBe('mainsFed: must be true or false, got the text "yes"');
+  });
+});

@@ -6,6 +6,7 @@ import {
   findNonFinite,
   onlyKeys,
   rangeFail,
+  readOptionalBoolean,
   readOptionalNumber,
   readOptionalString,
   readString,
@@ -19,7 +20,7 @@ import { parseRailPlan } from './parse-rail-plan';
 import { DEFAULT_MARGIN_K } from './constants';
 import { parseLifetime, parseSite, parseTouch } from './parse-reliability';
 
-const TOP_KEYS = ['format', 'version', 'title', 'description', 'notes', 'marginK', 'ambient', 'enclosure', 'sinks', 'devices', 'profile', 'railPlan', 'site', 'lifetime', 'touch'];
+const TOP_KEYS = ['format', 'version', 'title', 'description', 'notes', 'mainsFed', 'marginK', 'ambient', 'enclosure', 'sinks', 'devices', 'profile', 'railPlan', 'site', 'lifetime', 'touch'];
 const RESERVED_IDS = ['ambient', 'enclosure'];
 
 function checkUniqueIds(items: { id: string }[], listPath: string, taken: Map<string, string>): void {
@@ -89,6 +90,7 @@ export function parseStudy(json: unknown): StudyDocument {
   if (title === '') rangeFail('title', 'must not be empty');
   const description = readOptionalString(root, 'description', '') ?? '';
   readOptionalString(root, 'notes', '');
+  const mainsFed = readOptionalBoolean(root, 'mainsFed', '');
   const marginK = readOptionalNumber(root, 'marginK', '', { min: 0, unit: 'K' }) ?? DEFAULT_MARGIN_K;
   const ambient = parseAmbient(root.ambient, 'ambient');
   const enclosure = root.enclosure === undefined ? undefined : parseEnclosure(root.enclosure, 'enclosure');
@@ -104,6 +106,7 @@ export function parseStudy(json: unknown): StudyDocument {
   const railPlan = root.railPlan === undefined ? undefined : parseRailPlan(root.railPlan, 'railPlan', devices);
   const profile = parseProfile(root.profile, 'profile', devices, railPlan !== undefined);
   const doc: StudyDocument = { format: STUDY_FORMAT, version: STUDY_VERSION, title, description, marginK, ambient, sinks, devices, profile };
+  if (mainsFed !== undefined) doc.mainsFed = mainsFed;
   if (enclosure) doc.enclosure = enclosure;
   if (railPlan) doc.railPlan = railPlan;
   if (root.site !== undefined) doc.site = parseSite(root.site, 'site');

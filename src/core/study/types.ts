@@ -123,6 +123,8 @@ export type StudyDocument = {
   version: typeof STUDY_VERSION;
   title: string;
   description: string;
+  /** The supply is fed from the mains (shows the mains-wiring caution); absent when not stated. */
+  mainsFed?: boolean;
   marginK: number;
   ambient: Ambient;
   enclosure?: Enclosure;

@@ -65,7 +65,7 @@ function ReportBody({ study, printedAt }: { study: Study; printedAt: string }) {
             <Text tone="muted">No results: the saved document could not be read (see the inputs).</Text>
           </ReportSection>
         ) : null}
-        <ReportCautions result={result} />
+        <ReportCautions result={result} document={study.document} />
         <ReportComments studyId={study.id} />
       </View>
     </>

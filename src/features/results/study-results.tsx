@@ -18,7 +18,7 @@ import { TwoColumns } from './components/two-columns';
 import { UpdatingNote } from './components/updating-note';
 import { VerdictPanel } from './components/verdict-panel';
 import { curvesCsv, curvesFileName } from '@/charts/curves-csv';
-import { mainsHint } from './mains-hint';
+import { mainsCaution, type MainsCaution } from './mains-hint';
 import { shownElsewhere, soaSummary } from './soa-text';
 import { useStudyResult } from './use-study-result';
 import { studyVerdict } from './verdict';
@@ -32,7 +32,7 @@ export type StudyResultsProps = {
   seriesPoints?: number;
 };
 
-type SolvedProps = { result: StudyResult; mains: string | null; onPickTime?: (timeS: number) => void };
+type SolvedProps = { result: StudyResult; mains: MainsCaution | null; onPickTime?: (timeS: number) => void };
 
 /**
  * The verdict follows each result at once; the curves, tables and panels below follow a moment
@@ -128,7 +128,7 @@ const Details = memo(function Details({ result, mains, onPickTime }: SolvedProps
 /** The study's answer, solved in the client: verdict, heat curves, per-device and per-sink peaks, events. */
 export const StudyResults = memo(function StudyResults({ document, onPickTime, seriesPoints }: StudyResultsProps) {
   const state = useStudyResult(document, seriesPoints);
-  const mains = useMemo(() => mainsHint(document), [document]);
+  const mains = useMemo(() => mainsCaution(document), [document]);
   if (state.kind === 'empty') return null;
   return (
     <Card style={styles.card}>

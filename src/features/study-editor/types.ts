@@ -58,6 +58,7 @@ export type RawDocument = RawObject & {
   version?: number;
   title?: string;
   description?: string;
+  mainsFed?: boolean;
   marginK?: Num;
   ambient?: RawAmbient;
   enclosure?: RawObject & { rthKPerW?: Num; capacityJPerK?: Num };

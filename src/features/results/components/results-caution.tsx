@@ -4,12 +4,13 @@ import { Text } from '@/components/ui';
 import { color, spacing } from '@/constants/theme';
 import { formatQuantity } from '@/features/studies/quantity-format';
 
+import { MAINS_FED_TEXT, mainsHintText, type MainsCaution } from '../mains-hint';
 import { TOUCH_BURN_C } from './sink-table';
 
 export type ResultsCautionProps = {
   hotSinks: readonly { id: string; peakC: number }[];
-  /** What in the study points to a mains-fed supply (see mainsHint), or null. */
-  mains?: string | null;
+  /** The study's mains flag, or the hint from its text (see mainsCaution), or null. */
+  mains?: MainsCaution | null;
 };
 
 /** The cautions that go with the numbers (PHYSICS.md §7), naming any sink hot enough to burn. */
@@ -26,9 +27,14 @@ export function ResultsCaution({ hotSinks, mains = null }: ResultsCautionProps) 
         {hot.length ? `: ${hot.map((s) => `${s.id} reaches ${formatQuantity(s.peakC, '°C')}`).join(', ')}` : ''}. Limits for
         parts people can touch come from safety standards such as IEC 62368-1 and local codes.
       </Text>
-      {mains ? (
+      {mains?.kind === 'fed' ? (
         <Text variant="caption" tone="danger" testID="mains-caution">
-          {`The study mentions ${mains}: if this supply is fed from the mains, its mains wiring follows the local electrical codes and is done by qualified people.`}
+          {MAINS_FED_TEXT}
+        </Text>
+      ) : null}
+      {mains?.kind === 'hint' ? (
+        <Text variant="caption" tone="muted" testID="mains-hint">
+          {mainsHintText(mains.word)}
         </Text>
       ) : null}
     </View>

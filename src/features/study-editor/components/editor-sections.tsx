@@ -32,7 +32,7 @@ function summaryOf(key: SectionKey, values: EditorValues): string {
   const doc = values.document;
   switch (key) {
     case 'study':
-      return `Margin ${typeof doc.marginK === 'number' ? doc.marginK : 20} K below Tj,max`;
+      return `Margin ${typeof doc.marginK === 'number' ? doc.marginK : 20} K below Tj,max${doc.mainsFed === true ? ', mains-fed' : ''}`;
     case 'devices':
       return (doc.devices ?? []).map((d) => d.id).join(', ') || 'none';
     case 'thermal':

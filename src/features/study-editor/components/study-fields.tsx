@@ -1,8 +1,9 @@
-import { StyleSheet, View } from 'react-native';
+import { Pressable, StyleSheet, View } from 'react-native';
 
 import { Text } from '@/components/ui';
-import { spacing } from '@/constants/theme';
+import { color, radius, spacing } from '@/constants/theme';
 
+import { useEditorActions } from '../editor-context';
 import type { EditorValues } from '../types';
 import { QuantityField } from './quantity-field';
 import { TeamDefaultsNote } from './team-defaults-note';
@@ -10,12 +11,36 @@ import { TextEntry } from './text-entry';
 
 export type StudyFieldsProps = { values: EditorValues };
 
-/** Title, description and the margin the junctions must keep below Tj,max. */
+/** The `mainsFed` flag as a checkbox; unticking removes the field (not stated) rather than writing false. */
+function MainsFedBox({ checked }: { checked: boolean }) {
+  const { set } = useEditorActions();
+  return (
+    <Pressable
+      role="checkbox"
+      aria-checked={checked}
+      accessibilityState={{ checked }}
+      accessibilityLabel="Mains-fed"
+      onPress={() => set('document.mainsFed', checked ? undefined : true)}
+      style={({ pressed }) => [styles.check, pressed && styles.pressed]}
+    >
+      <View style={[styles.box, checked && styles.boxOn]}>{checked ? <Text style={styles.tick}>✓</Text> : null}</View>
+      <View style={styles.checkText}>
+        <Text variant="label">Mains-fed</Text>
+        <Text variant="caption" tone="muted">
+          The supply is fed from the mains: the results and report add the mains-wiring caution.
+        </Text>
+      </View>
+    </Pressable>
+  );
+}
+
+/** Title, description, the mains flag and the margin the junctions must keep below Tj,max. */
 export function StudyFields({ values }: StudyFieldsProps) {
   return (
-    <View style={styles.box}>
+    <View style={styles.fields}>
       <TextEntry field="title" mirror="document.title" value={values.title} label="Title" size="full" />
       <TextEntry field="description" mirror="document.description" value={values.description} label="Description" multiline size="full" />
+      <MainsFedBox checked={values.document.mainsFed === true} />
       <View style={styles.margin}>
         <QuantityField
           field="document.marginK"
@@ -37,6 +62,22 @@ export function StudyFields({ values }: StudyFieldsProps) {
 }
 
 const styles = StyleSheet.create({
-  box: { gap: spacing.md },
+  fields: { gap: spacing.md },
   margin: { maxWidth: 360 },
+  check: { flexDirection: 'row', alignItems: 'flex-start', gap: spacing.sm, minHeight: 44, paddingVertical: spacing.xs },
+  pressed: { opacity: 0.7 },
+  box: {
+    width: 22,
+    height: 22,
+    marginTop: 1,
+    borderRadius: radius.sm,
+    borderWidth: 1.5,
+    borderColor: color.borderStrong,
+    backgroundColor: color.surface,
+    alignItems: 'center',
+    justifyContent: 'center',
+  },
+  boxOn: { backgroundColor: color.accent, borderColor: color.accent },
+  tick: { color: color.surface, fontSize: 14, lineHeight: 16 },
+  checkText: { flex: 1, gap: 2 },
 });
