@@ -32,6 +32,19 @@ export function createSoaTracker(sm: StudyModel): SoaTracker | null {
   const firstOfRun: (Open | null)[] = devices.map(() => null);
   const periodic = doc.profile.periodic;
 
+  /** Stretches handed to the accumulators (they copy what they keep): one object, refilled. */
+  const scratch: SoaStretch = { timeS: 0, durationS: 0, vceV: 0, icA: 0, caseC: 0 };
+  const fill = (o: Open): SoaStretch => {
+    scratch.timeS = o.timeS;
+    scratch.durationS = o.endS - o.timeS;
+    scratch.vceV = o.vceV;
+    scratch.icA = o.icA;
+    scratch.caseC = o.caseC;
+    return scratch;
+  };
+  /** A closed stretch's record, reused for the device's next one unless a periodic run holds it back. */
+  const spare: (Open | null)[] = devices.map(() => null);
+
   function close(k: number): void {
     const o = open[k];
     open[k] = null;
@@ -41,30 +54,48 @@ export function createSoaTracker(sm: StudyModel): SoaTracker | null {
       firstOfRun[k] = o;
       return;
     }
-    accumulators[k].add(toStretch(o));
+    accumulators[k].add(fill(o));
+    spare[k] = o;
+  }
+
+  // The piece being tracked, for caseMax (set per call of stretch: no closure per piece).
+  let pieceModel: ModalModel | null = null;
+  let pieceT: ArrayLike<number> = [];
+  let pieceU: ArrayLike<number> = [];
+  let pieceH = 0;
+  let loaded = false;
+
+  /** Highest case temperature of the piece, above `atLeast` (else atLeast): the modal bound where it is tight, else the exact search. */
+  function caseMax(node: number, atLeast: number): number {
+    const model = pieceModel!;
+    const bounds = boundsFor(model);
+    if (!loaded) bounds.load(pieceT, pieceU, pieceH);
+    loaded = true;
+    const upper = bounds.upper(node);
+    if (upper <= atLeast) return atLeast;
+    if (upper - bounds.endMax(node) <= SOA_CASE_TOL_K) return Math.max(atLeast, upper);
+    // Bounds over halved sub-stretches settle most stretches to the tolerance at a fraction of the exact search's cost.
+    const within = bounds.maxWithin(node, SOA_CASE_TOL_K);
+    const best = Number.isNaN(within) ? peakInSegment(model, pieceT, pieceU, pieceH, node).valueC : within;
+    return Math.max(atLeast, best);
   }
 
   function stretch(model: ModalModel, T: ArrayLike<number>, u: ArrayLike<number>, t: number, h: number, segmentIndex: number, power: SegmentPower, on: ArrayLike<boolean>): void {
     if (h === 0) return;
     const drive = doc.profile.segments[segmentIndex].electrical;
     const op = power.operatingPoint;
-    let loaded = false;
-    /** Highest case temperature of the piece, above `atLeast` (else atLeast): the modal bound where it is tight, else the exact search. */
-    const caseMax = (node: number, atLeast: number): number => {
-      const bounds = boundsFor(model);
-      if (!loaded) bounds.load(T, u, h);
-      loaded = true;
-      const upper = bounds.upper(node);
-      if (upper <= atLeast) return atLeast;
-      if (upper - bounds.endMax(node) <= SOA_CASE_TOL_K) return Math.max(atLeast, upper);
-      // Bounds over halved sub-stretches settle most stretches to the tolerance at a fraction of the exact search's cost.
-      const within = bounds.maxWithin(node, SOA_CASE_TOL_K);
-      const best = Number.isNaN(within) ? peakInSegment(model, T, u, h, node).valueC : within;
-      return Math.max(atLeast, best);
-    };
-    devices.forEach((d, k) => {
+    pieceModel = model;
+    pieceT = T;
+    pieceU = u;
+    pieceH = h;
+    loaded = false;
+    for (let k = 0; k < devices.length; k++) {
+      const d = devices[k];
       const conducts = drive && op && !op.outputOff && on[d] && op.partCurrentA > 0 && power.fed.includes(d);
-      if (!conducts) return close(k);
+      if (!conducts) {
+        close(k);
+        continue;
+      }
       const vceV = drive.vinV - op.voutV;
       const icA = op.partCurrentA;
       const o = open[k];
@@ -72,11 +103,24 @@ export function createSoaTracker(sm: StudyModel): SoaTracker | null {
       if (o && o.vceV === vceV && o.icA === icA && Math.abs(o.endS - t) <= STRETCH_JOIN_REL_TOL * Math.max(1, t)) {
         o.endS = t + h;
         o.caseC = caseMax(node, o.caseC);
-        return;
+        continue;
       }
       close(k);
-      open[k] = { timeS: t, endS: t + h, vceV, icA, caseC: caseMax(node, -Infinity) };
-    });
+      const caseC = caseMax(node, -Infinity);
+      const next = spare[k];
+      spare[k] = null;
+      if (next) {
+        next.timeS = t;
+        next.endS = t + h;
+        next.vceV = vceV;
+        next.icA = icA;
+        next.caseC = caseC;
+        open[k] = next;
+      } else {
+        open[k] = { timeS: t, endS: t + h, vceV, icA, caseC };
+      }
+    }
+    pieceT = pieceU = [];
   }
 
   function finish(endS: number): void {
