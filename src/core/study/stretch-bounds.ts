@@ -79,11 +79,26 @@ export function createStretchBounds(model: ModalModel): StretchBounds {
 
   const coef = new Float64Array(n);
   const stack = new Float64Array(2 * (MAX_BOUND_STEPS + 2));
+  /** e^(−λ_i t) at both ends of each stacked interval (2n per interval): each end's exponentials are computed once. */
+  const ends = new Float64Array((MAX_BOUND_STEPS + 2) * 2 * n);
+  const decayAt = (t: number, at: number) => {
+    for (let i = 0; i < n; i++) ends[at + i] = Math.exp(-rates[i] * t);
+  };
+  const valueAt = (v: number, at: number) => {
+    let s = v;
+    for (let i = 0; i < n; i++) s += coef[i] * ends[at + i];
+    return s;
+  };
 
   /**
    * Over [t0, t1] each term a_i e^(−λ_i τ) lies between its end values, so their larger ends
    * bound T there; the values at the ends are reached. An interval whose bound lies within
    * tolK of the best value reached is settled at its bound; the others are halved.
+   *
+   * Two bounds, the smaller kept: the terms' larger ends, and the slopes. T' is a sum of
+   * monotone terms too, so its extremes on [t0, t1] lie between smin and smax; T then lies
+   * below both lines T(t0) + smax (t − t0) and T(t1) − smin (t1 − t), whose lower envelope
+   * peaks at an end or where they cross.
    */
   function maxWithin(node: number, tolK: number): number {
     let v = 0;
@@ -93,26 +108,28 @@ export function createStretchBounds(model: ModalModel): StretchBounds {
       v += w * xInf[i];
       coef[i] = w * dx[i];
     }
-    const at = (t: number) => {
-      let s = v;
-      for (let i = 0; i < n; i++) s += coef[i] * Math.exp(-rates[i] * t);
-      return s;
-    };
-    /**
-     * Two bounds, the smaller kept: the terms' larger ends, and the slopes. T' is a sum of
-     * monotone terms too, so its extremes on [t0, t1] lie between smin and smax; T then lies
-     * below both lines T(t0) + smax (t − t0) and T(t1) − smin (t1 − t), whose lower envelope
-     * peaks at an end or where they cross.
-     */
-    const boundOver = (t0: number, t1: number) => {
+    let top = 0;
+    stack[top++] = 0;
+    stack[top++] = hRef;
+    decayAt(0, 0);
+    decayAt(hRef, n);
+    let best = Math.max(valueAt(v, 0), valueAt(v, n));
+    let settled = -Infinity;
+    for (let steps = 0; top > 0; steps++) {
+      if (steps > MAX_BOUND_STEPS || top + 4 > stack.length) return NaN;
+      const t1 = stack[--top];
+      const t0 = stack[--top];
+      // Interval top/2 sits at ends[top·n ...]: e(t0) then e(t1).
+      const e0 = top * n;
+      const e1 = e0 + n;
       let s = v;
       let f0 = v;
       let f1 = v;
       let smax = 0;
       let smin = 0;
       for (let i = 0; i < n; i++) {
-        const a = coef[i] * Math.exp(-rates[i] * t0);
-        const b = coef[i] * Math.exp(-rates[i] * t1);
+        const a = coef[i] * ends[e0 + i];
+        const b = coef[i] * ends[e1 + i];
         f0 += a;
         f1 += b;
         s += a > b ? a : b;
@@ -127,24 +144,21 @@ export function createStretchBounds(model: ModalModel): StretchBounds {
         const cross = (f1 - smin * len - f0) / (smax - smin);
         if (cross > 0 && cross < len) slopes = Math.max(slopes, f0 + smax * cross);
       }
-      return s < slopes ? s : slopes;
-    };
-    let best = Math.max(at(0), at(hRef));
-    let settled = -Infinity;
-    let top = 0;
-    stack[top++] = 0;
-    stack[top++] = hRef;
-    for (let steps = 0; top > 0; steps++) {
-      if (steps > MAX_BOUND_STEPS || top + 4 > stack.length) return NaN;
-      const t1 = stack[--top];
-      const t0 = stack[--top];
-      const u = boundOver(t0, t1);
+      const u = s < slopes ? s : slopes;
       if (u <= best + tolK) {
         if (u > settled) settled = u;
         continue;
       }
       const mid = 0.5 * (t0 + t1);
-      const m = at(mid);
+      // [t0, mid] stays at this slot (e(t0) in place, e(mid) after it); [mid, t1] goes to the next.
+      const next = e0 + 2 * n;
+      for (let i = 0; i < n; i++) {
+        ends[next + n + i] = ends[e1 + i];
+        const e = Math.exp(-rates[i] * mid);
+        ends[e1 + i] = e;
+        ends[next + i] = e;
+      }
+      const m = valueAt(v, e1);
       if (m > best) best = m;
       stack[top++] = t0;
       stack[top++] = mid;
