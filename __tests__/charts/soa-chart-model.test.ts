@@ -1,5 +1,5 @@
 import { logFrame } from '@/charts/log-frame';
-import { boundaryCurrentAt, boundaryStyle, nearestPoint, segmentLabels } from '@/charts/soa-chart-model';
+import { boundaryCurrentAt, boundaryStyle, mostOccurrences, nearestPoint, pointRadii, POINT_RADIUS_MAX, POINT_RADIUS_MIN, segmentLabels } from '@/charts/soa-chart-model';
 import { overlaps } from '@/charts/label-layout';
 import { soaBoundary, type SoaModel } from '@/core/soa';
 
@@ -60,5 +60,41 @@ describe('SOA chart model', () => {
     const styles = [0, 1, 2, 3, 4, 5].map(boundaryStyle);
     expect(new Set(styles.map((s) => s.dash ?? 'solid')).size).toBe(6);
     expect(new Set(styles.map((s) => s.stroke)).size).toBe(6);
+  });
+});
+
+describe('SOA chart point sizes', () => {
+  const at = (occurrences?: number) => ({ vceV: 10, icA: 1, occurrences });
+
+  it('gives more stretches a larger ring, its area growing with the logarithm of the count', () => {
+    const r = pointRadii([at(1), at(10), at(100), at(1000)]);
+    expect(r[0]).toBeLessThan(r[1]);
+    expect(r[1]).toBeLessThan(r[2]);
+    expect(r[2]).toBeLessThan(r[3]);
+    // Area ∝ log n above the smallest ring: each tenfold step adds the same area (log10 1000 = 3 steps).
+    const area = r.map((x) => Math.PI * x * x);
+    const step = (area[3] - area[0]) / 3;
+    assertInRelDelta(area[1] - area[0], step, 1e-9, 'area added by 1 → 10');
+    assertInRelDelta(area[2] - area[1], step, 1e-9, 'area added by 10 → 100');
+  });
+
+  it('keeps every ring between the smallest and largest readable radius, whatever the counts', () => {
+    const r = pointRadii([at(1), at(2), at(1e9), at(undefined), at(0), at(Number.NaN)]);
+    for (const x of r) {
+      expect(x).toBeGreaterThanOrEqual(POINT_RADIUS_MIN);
+      expect(x).toBeLessThanOrEqual(POINT_RADIUS_MAX);
+    }
+    expect(r[0]).toBe(POINT_RADIUS_MIN);
+    expect(r[2]).toBeCloseTo(POINT_RADIUS_MAX, 12);
+    // A missing or meaningless count counts as one stretch.
+    expect(r.slice(3)).toEqual([POINT_RADIUS_MIN, POINT_RADIUS_MIN, POINT_RADIUS_MIN]);
+    // On a 390 px phone the plot is about 320 px wide: the largest ring stays under 6 % of it.
+    expect(2 * POINT_RADIUS_MAX).toBeLessThan(0.06 * 320);
+    expect(mostOccurrences([at(3), at(1e9), at(undefined)])).toBe(1e9);
+  });
+
+  it('draws every point at the smallest ring when none stands for more than one stretch', () => {
+    expect(pointRadii([at(1), at(undefined), at(1)])).toEqual([POINT_RADIUS_MIN, POINT_RADIUS_MIN, POINT_RADIUS_MIN]);
+    expect(mostOccurrences([at(1), at(undefined)])).toBe(1);
   });
 });

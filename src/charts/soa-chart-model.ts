@@ -9,8 +9,11 @@ export type SoaChartPointValue = { vceV: number; icA: number };
 export type SoaChartSegment = { limit: SoaLimit; points: readonly SoaChartPointValue[] };
 /** One boundary of the chart (a case temperature and pulse width), its segments labelled by limit. */
 export type SoaChartBoundary = { label: string; segments: readonly SoaChartSegment[] };
-/** An operating point; `worst` marks the one with the smallest margin. */
-export type SoaChartPoint = SoaChartPointValue & { worst?: boolean };
+/**
+ * An operating point; `worst` marks the one with the smallest margin, `occurrences` counts the
+ * stretches of the profile merged into it (1 when absent).
+ */
+export type SoaChartPoint = SoaChartPointValue & { worst?: boolean; occurrences?: number };
 
 export const LIMIT_LABEL: Record<SoaLimit, string> = {
   current: 'current',
@@ -113,3 +116,26 @@ export function nearestPoint(frame: LogFrame, points: readonly SoaChartPointValu
   });
   return best;
 }
+
+const countOf = (p: SoaChartPoint) => (p.occurrences !== undefined && Number.isFinite(p.occurrences) && p.occurrences > 1 ? p.occurrences : 1);
+
+/** The most stretches any one point stands for (1 when none stands for more). */
+export const mostOccurrences = (points: readonly SoaChartPoint[]) => points.reduce((m, p) => Math.max(m, countOf(p)), 1);
+
+/** Ring radii of the operating points, px: the smallest is today's plain ring, the largest stays readable beside it on a phone. */
+export const POINT_RADIUS_MIN = 3.5;
+export const POINT_RADIUS_MAX = 9;
+
+/**
+ * The ring radius of each operating point, px, from the stretches it stands for: the ring's
+ * area grows with the logarithm of its count, from POINT_RADIUS_MIN for a single stretch to
+ * POINT_RADIUS_MAX for the point with the most (a log scale, so a point met a thousand times
+ * does not bury the rest). All points get the smallest ring when none stands for more than one.
+ */
+export function pointRadii(points: readonly SoaChartPoint[]): number[] {
+  const most = mostOccurrences(points);
+  const min2 = POINT_RADIUS_MIN ** 2;
+  const span2 = POINT_RADIUS_MAX ** 2 - min2;
+  return points.map((p) => (most > 1 ? Math.sqrt(min2 + (span2 * Math.log(countOf(p))) / Math.log(most)) : POINT_RADIUS_MIN));
+}
+

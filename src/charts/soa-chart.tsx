@@ -14,7 +14,9 @@ import {
   boundaryCurrentAt,
   boundaryStyle,
   LIMIT_LABEL,
+  mostOccurrences,
   nearestPoint,
+  pointRadii,
   segmentLabels,
   SOA_LABEL_SIZE,
   type SoaChartBoundary,
@@ -47,22 +49,28 @@ const segmentPath = (frame: LogFrame, points: readonly SoaChartPointValue[]) =>
     .x((p) => frame.x(p.vceV))
     .y((p) => frame.y(p.icA))(points.filter((p) => p.vceV > 0 && p.icA > 0)) ?? '';
 
-/** The operating points, worst one ringed; hundreds of them, so drawn again only when the frame or the points change (not on hover). */
-const PointMarkers = memo(function PointMarkers({ frame, points }: { frame: LogFrame; points: readonly SoaChartPoint[] }) {
+/**
+ * The operating points, each ring sized by the stretches it stands for (larger ones drawn first so
+ * smaller ones stay on top), the worst one marked; hundreds of them, so drawn again only when the
+ * frame or the points change (not on hover).
+ */
+const PointMarkers = memo(function PointMarkers({ frame, points, radii }: { frame: LogFrame; points: readonly SoaChartPoint[]; radii: readonly number[] }) {
+  const order = useMemo(() => points.map((_, i) => i).sort((a, b) => radii[b] - radii[a] || a - b), [points, radii]);
+  const worst = points.findIndex((p) => p.worst);
+  const drawn = (i: number) => points[i].vceV > 0 && points[i].icA > 0;
   return (
     <>
-      {points.map((p, i) =>
-        p.vceV > 0 && p.icA > 0 ? (
-          p.worst ? (
-            <G key={`p${i}`}>
-              <Circle cx={frame.x(p.vceV)} cy={frame.y(p.icA)} r={8} stroke={color.danger} fill="none" strokeWidth={1.5} />
-              <Circle cx={frame.x(p.vceV)} cy={frame.y(p.icA)} r={4} fill={color.danger} />
-            </G>
-          ) : (
-            <Circle key={`p${i}`} cx={frame.x(p.vceV)} cy={frame.y(p.icA)} r={3.5} stroke={markerColours.stroke} fill={markerColours.fill} strokeWidth={1.5} />
-          )
+      {order.map((i) =>
+        drawn(i) && i !== worst ? (
+          <Circle key={`p${i}`} cx={frame.x(points[i].vceV)} cy={frame.y(points[i].icA)} r={radii[i]} stroke={markerColours.stroke} fill={markerColours.fill} strokeWidth={1.5} />
         ) : null,
       )}
+      {worst >= 0 && drawn(worst) ? (
+        <G key="worst">
+          <Circle cx={frame.x(points[worst].vceV)} cy={frame.y(points[worst].icA)} r={8} stroke={color.danger} fill="none" strokeWidth={1.5} />
+          <Circle cx={frame.x(points[worst].vceV)} cy={frame.y(points[worst].icA)} r={4} fill={color.danger} />
+        </G>
+      ) : null}
     </>
   );
 });
@@ -87,9 +95,18 @@ export function SoaChart({ boundaries, points = [], onPickPoint, label, height =
     return logFrame(width, height, xs, ys);
   }, [boundaries, points, width, height]);
 
+  const radii = useMemo(() => pointRadii(points), [points]);
+  const most = useMemo(() => mostOccurrences(points), [points]);
   const markers = useMemo(
-    () => (frame ? points.filter((p) => p.vceV > 0 && p.icA > 0).map((p) => ({ x: frame.x(p.vceV) - 6, y: frame.y(p.icA) - 6, width: 12, height: 12 })) : []),
-    [frame, points],
+    () =>
+      frame
+        ? points.flatMap((p, i) => {
+            if (!(p.vceV > 0 && p.icA > 0)) return [];
+            const half = Math.max(6, radii[i] + 1);
+            return [{ x: frame.x(p.vceV) - half, y: frame.y(p.icA) - half, width: 2 * half, height: 2 * half }];
+          })
+        : [],
+    [frame, points, radii],
   );
   const labels = useMemo(() => (frame ? segmentLabels(frame, boundaries, markers) : []), [frame, boundaries, markers]);
   const worst = points.find((p) => p.worst);
@@ -169,7 +186,7 @@ export function SoaChart({ boundaries, points = [], onPickPoint, label, height =
                 {l.text}
               </SvgText>
             ))}
-            <PointMarkers frame={frame} points={points} />
+            <PointMarkers frame={frame} points={points} radii={radii} />
             {hoverV !== null && hoverV >= frame.x.domain()[0] && hoverV <= frame.x.domain()[1] ? (
               <Path d={`M${frame.x(hoverV)},${frame.top}V${frame.bottom}`} stroke={color.ink} strokeWidth={1} strokeDasharray="3 3" />
             ) : null}
@@ -189,6 +206,11 @@ export function SoaChart({ boundaries, points = [], onPickPoint, label, height =
         ) : null}
       </View>
       <ChartKey items={key} />
+      {most > 1 ? (
+        <Text variant="caption" tone="muted" testID="soa-point-size-note">
+          {`Ring size shows how many stretches of the profile each point stands for: its area grows with the logarithm of the count; the largest ring stands for ${most}.`}
+        </Text>
+      ) : null}
     </View>
   );
 }

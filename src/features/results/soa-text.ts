@@ -61,7 +61,7 @@ const isWorst = (p: SoaPointResult, w: SoaPointResult | null) => w !== null && p
 
 /** Every listed operating point, the worst one flagged. */
 export function chartPoints(soa: DeviceSoaResult): SoaChartPoint[] {
-  return soa.points.map((p) => ({ vceV: p.vceV, icA: p.icA, worst: isWorst(p, soa.worst) }));
+  return soa.points.map((p) => ({ vceV: p.vceV, icA: p.icA, worst: isWorst(p, soa.worst), occurrences: p.occurrences }));
 }
 
 /** Warnings that say the same thing, gathered over the devices that raise them. */

@@ -28,7 +28,7 @@ function DeviceSoaChart({ soa }: { soa: DeviceSoaResult }) {
     <View testID={`report-soa-chart-${soa.device}`}>
       <SoaChart
         boundaries={[boundaryOf(soa.boundaries.atWorstCase), boundaryOf(soa.boundaries.atReference)]}
-        points={soa.points.map((p) => ({ vceV: p.vceV, icA: p.icA, worst: isWorst(p, soa.worst) }))}
+        points={soa.points.map((p) => ({ vceV: p.vceV, icA: p.icA, worst: isWorst(p, soa.worst), occurrences: p.occurrences }))}
         label={`Safe operating area of ${soa.device} with its operating points`}
         height={280}
       />
