@@ -53,8 +53,11 @@ export function selectRailTaps(doc: StudyDocument): RailSelection {
   const passMembers = doc.devices.filter((d) => (d.electrical?.role ?? 'pass') === 'pass').map(member);
   const byId = new Map(doc.devices.map((d) => [d.id, d]));
   const points = new Map<ProfileSegment, TapPoint[]>();
-  /** Points by what they depend on (Vout, Iload, fed devices, tap): profiles repeat their steps. */
-  const byValue = new Map<string, TapPoint>();
+  /**
+   * Points by what they depend on (fed devices, Vout, Iload; then tap by index): profiles
+   * repeat their steps. Number keys, no key string per segment.
+   */
+  const byValue = new Map<string, Map<number, Map<number, TapPoint[]>>>();
   const resolvedCache = new Map<ProfileSegment, ProfileSegment[]>();
   const warnings: string[] = [];
 
@@ -64,8 +67,14 @@ export function selectRailTaps(doc: StudyDocument): RailSelection {
     const cached = list[tap];
     if (cached) return cached;
     const drive = segment.railDrive!;
-    const key = `${drive.voutV}|${drive.iloadA}|${tap}|${drive.devices ? drive.devices.join(',') : ''}`;
-    const known = byValue.get(key);
+    const fedKey = drive.devices ? drive.devices.join(',') : '';
+    let byVout = byValue.get(fedKey);
+    if (!byVout) byValue.set(fedKey, (byVout = new Map()));
+    let byIload = byVout.get(drive.voutV);
+    if (!byIload) byVout.set(drive.voutV, (byIload = new Map()));
+    let byTap = byIload.get(drive.iloadA);
+    if (!byTap) byIload.set(drive.iloadA, (byTap = []));
+    const known = byTap[tap];
     if (known) return (list[tap] = known);
     const members = drive.devices ? drive.devices.map((id) => member(byId.get(id)!)) : passMembers;
     const solve = (vin: number) => solveOperatingPoint({ vinV: vin, voutV: drive.voutV, iloadA: drive.iloadA }, members);
@@ -80,7 +89,7 @@ export function selectRailTaps(doc: StudyDocument): RailSelection {
     }
     const point = { vinV: vin, op, sensedV: plan.sensed === 'output' ? op.voutV : drive.voutV };
     list[tap] = point;
-    byValue.set(key, point);
+    byTap[tap] = point;
     return point;
   }
 
@@ -153,9 +162,13 @@ export function selectRailTaps(doc: StudyDocument): RailSelection {
     let list = resolvedCache.get(segment);
     if (!list) resolvedCache.set(segment, (list = []));
     if (!list[tap]) {
+      // Rest and plain literals, no spreads: this runs once per segment of a long profile.
       const { railDrive, ...rest } = segment;
       const vinV = pointOn(segment, tap).vinV;
-      list[tap] = { ...rest, electrical: { vinV, voutV: railDrive.voutV, iloadA: railDrive.iloadA, ...(railDrive.devices ? { devices: railDrive.devices } : {}) } };
+      const { voutV, iloadA, devices } = railDrive;
+      const resolvedSegment: ProfileSegment = rest;
+      resolvedSegment.electrical = devices ? { vinV, voutV, iloadA, devices } : { vinV, voutV, iloadA };
+      list[tap] = resolvedSegment;
     }
     return list[tap];
   });
