@@ -1,9 +1,9 @@
-import type { SoaChartBoundary } from '@/charts/soa-chart-model';
+import type { SoaChartBoundary } from './soa-chart-model';
 import { soaBoundary, type PulseWidth } from '@/core/soa';
 import { parseSoa } from '@/core/study';
 
-import { formatTime } from './part-format';
-import type { SoaJson } from './types';
+import { formatTime } from '@/features/parts/part-format';
+import type { SoaJson } from '@/features/parts/types';
 
 /** Datasheet SOA curves are drawn at a 25 °C case (PHYSICS.md §4). */
 export const REFERENCE_CASE_C = 25;

@@ -9,11 +9,11 @@ import { FilePicker } from '@/features/catalogues/components/file-picker';
 import type { PickedFile } from '@/features/catalogues/types';
 import { formatQuantity } from '@/features/studies/quantity-format';
 
-import { useSoaPointsCsv } from '../api';
-import { formatPulse } from '../part-format';
-import { partSoaChart } from '../soa-boundaries';
-import type { SoaCurveJson, TransistorKind } from '../types';
-import { ValueTable } from './value-table';
+import { partSoaChart } from '@/charts/soa-boundaries';
+import { useSoaPointsCsv } from '@/features/parts/api';
+import { ValueTable } from '@/features/parts/components/value-table';
+import { formatPulse } from '@/features/parts/part-format';
+import type { SoaCurveJson, TransistorKind } from '@/features/parts/types';
 
 export type SoaCsvPanelProps = {
   transistor: TransistorKind;

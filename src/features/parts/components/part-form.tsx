@@ -3,6 +3,7 @@ import { useMemo, useState } from 'react';
 import { StyleSheet, View } from 'react-native';
 
 import { errorMessage, fieldErrors } from '@/api';
+import { SoaCsvPanel } from '@/components/soa-csv-panel';
 import { Button, Card, InlineAlert, Text, TextField, useIsWide } from '@/components/ui';
 import { spacing } from '@/constants/theme';
 import { schemaErrors } from '@/features/catalogues/form-values';
@@ -19,7 +20,6 @@ import { ChoiceChips } from './choice-chips';
 import { ElectricalEditor } from './electrical-editor';
 import { PartFormProvider } from './form-context';
 import { NumberField } from './number-field';
-import { SoaCsvPanel } from './soa-csv-panel';
 import { SoaEditor } from './soa-editor';
 import { ThermalEditor } from './thermal-editor';
 

@@ -1,18 +1,18 @@
 import { useMemo } from 'react';
 import { StyleSheet, View } from 'react-native';
 
+import { SoaCsvPanel } from '@/components/soa-csv-panel';
 import { Button, Text } from '@/components/ui';
+import { partSoaChart } from '@/charts/soa-boundaries';
 import { SoaChart } from '@/charts/soa-chart';
 import { spacing } from '@/constants/theme';
 
 import { curveRows, type PartFormValues, type SoaValues } from '../part-form-values';
 import { readSoa } from '../part-input';
 import { readField } from '../quantity-text';
-import { partSoaChart } from '../soa-boundaries';
 import type { SoaJson, TransistorKind } from '../types';
 import { ChoiceChips } from './choice-chips';
 import { NumberField } from './number-field';
-import { SoaCsvPanel } from './soa-csv-panel';
 import { SoaCurvesEditor } from './soa-curves-editor';
 
 const KINDS = [

@@ -2,6 +2,7 @@ import { useMemo } from 'react';
 import { StyleSheet, View } from 'react-native';
 
 import { InlineAlert, Text, useIsWide } from '@/components/ui';
+import { partSoaChart } from '@/charts/soa-boundaries';
 import { SoaChart } from '@/charts/soa-chart';
 import { spacing } from '@/constants/theme';
 import { FactGrid } from '@/features/studies/components/fact-grid';
@@ -9,7 +10,6 @@ import type { Fact } from '@/features/studies/document-facts';
 import { formatQuantity } from '@/features/studies/quantity-format';
 
 import { formatPercent, formatPulse, formatTime, KIND_LABEL } from '../part-format';
-import { partSoaChart } from '../soa-boundaries';
 import type { DeratingJson, SoaJson } from '../types';
 import { ValueTable } from './value-table';
 

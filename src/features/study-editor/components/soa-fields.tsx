@@ -1,11 +1,11 @@
 import { memo, useMemo } from 'react';
 import { StyleSheet, View } from 'react-native';
 
+import { partSoaChart } from '@/charts/soa-boundaries';
 import { SoaChart } from '@/charts/soa-chart';
+import { SoaCsvPanel } from '@/components/soa-csv-panel';
 import { Button, Text } from '@/components/ui';
 import { color, spacing } from '@/constants/theme';
-import { SoaCsvPanel } from '@/features/parts/components/soa-csv-panel';
-import { partSoaChart } from '@/features/parts/soa-boundaries';
 import type { SoaJson } from '@/features/parts/types';
 
 import { useEditorActions, useErrorsUnder, useFieldError } from '../editor-context';
