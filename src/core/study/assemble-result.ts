@@ -48,13 +48,30 @@ function soaResults(input: AssembleInput): Record<string, DeviceSoaResult> {
   return out;
 }
 
+/** Whether every number in the value is finite: the walk of assertFinite without a path string per field. */
+function allFinite(value: unknown): boolean {
+  if (typeof value === 'number') return Number.isFinite(value);
+  if (!value || typeof value !== 'object' || ArrayBuffer.isView(value)) return true;
+  if (Array.isArray(value)) {
+    for (let i = 0; i < value.length; i++) if (!allFinite(value[i])) return false;
+    return true;
+  }
+  for (const k in value) if (Object.prototype.hasOwnProperty.call(value, k) && !allFinite((value as Record<string, unknown>)[k])) return false;
+  return true;
+}
+
+/** Throws, naming the field, where a number is not finite (the path is built only then). */
 function assertFinite(value: unknown, path: string): void {
+  if (!allFinite(value)) findNonFinite(value, path);
+}
+
+function findNonFinite(value: unknown, path: string): void {
   if (typeof value === 'number' && !Number.isFinite(value)) {
     throw new RangeError(`${path}: the solution is not a finite number; check the study's values for extremes`);
   }
-  if (Array.isArray(value)) value.forEach((v, i) => assertFinite(v, `${path}[${i}]`));
+  if (Array.isArray(value)) value.forEach((v, i) => findNonFinite(v, `${path}[${i}]`));
   else if (value && typeof value === 'object' && !ArrayBuffer.isView(value)) {
-    for (const [k, v] of Object.entries(value)) assertFinite(v, `${path}.${k}`);
+    for (const [k, v] of Object.entries(value)) findNonFinite(v, `${path}.${k}`);
   }
 }
 
