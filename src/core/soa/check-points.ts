@@ -6,6 +6,26 @@ import { pulseFor } from './pulse-for';
 import { soaPieces } from './soa-pieces';
 import type { PulseWidth, SoaCheck, SoaLimit, SoaModel, SoaOperatingPoint, SoaWarning, SoaWorstPoint } from './types';
 
+const finiteAtLeast = (v: unknown, min: number) => typeof v === 'number' && Number.isFinite(v) && v >= min;
+
+/**
+ * The point's pulse width, after the argument checks; their messages (and the field path
+ * they name) are built only for a point that fails them.
+ */
+function checkedPulse(model: SoaModel, p: SoaOperatingPoint, k: number): PulseWidth {
+  if (finiteAtLeast(p.timeS, -Infinity) && finiteAtLeast(p.durationS, 0) && finiteAtLeast(p.vceV, 0) && finiteAtLeast(p.icA, 0) && finiteAtLeast(p.caseC, -Infinity)) {
+    return pulseFor(model, p.durationS);
+  }
+  const path = `points[${k}]`;
+  checkNumber(p.timeS, `${path}.timeS`);
+  checkNumber(p.durationS, `${path}.durationS`, 0);
+  checkNumber(p.vceV, `${path}.vceV`, 0);
+  checkNumber(p.icA, `${path}.icA`, 0);
+  const pulse = pulseFor(model, p.durationS);
+  checkCondition({ caseC: p.caseC, pulseS: pulse === 0 ? Number.MIN_VALUE : pulse }, path);
+  return pulse;
+}
+
 /**
  * Checks every operating point against the SOA at its own case temperature and duration
  * (PHYSICS.md §4): margin Iallowed / Ic per point, the worst point and when it happens,
@@ -25,15 +45,9 @@ export function checkOperatingPoints(model: SoaModel, points: readonly SoaOperat
   let linear: SoaWarning | null = null;
   for (let k = 0; k < n; k++) {
     const p = points[k];
-    const path = `points[${k}]`;
-    checkNumber(p.timeS, `${path}.timeS`);
-    checkNumber(p.durationS, `${path}.durationS`, 0);
-    checkNumber(p.vceV, `${path}.vceV`, 0);
-    checkNumber(p.icA, `${path}.icA`, 0);
-    const pulse = pulseFor(model, p.durationS);
+    const pulse = checkedPulse(model, p, k);
     // A zero-length stretch is a pulse of no width: nothing heats, only the current and voltage limits apply.
     const cond = { caseC: p.caseC, pulseS: pulse === 0 ? Number.MIN_VALUE : pulse };
-    checkCondition(cond, path);
     const { pieces, vceMaxV } = soaPieces(model, cond);
     const a = lowestLimit(pieces, vceMaxV, p.vceV);
     allowedA[k] = a.currentA;
