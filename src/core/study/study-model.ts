@@ -5,6 +5,30 @@ import { buildStudyNetwork, caseNodeId, ENCLOSURE_NODE_ID, packageStages, sinkNo
 import { sinkRsa } from './convection';
 
 const MAX_CACHED_MODELS = 256;
+/** Compiled networks kept across evaluations (a live edit solves the same network again). */
+const MAX_SHARED_MODELS = 512;
+const sharedModels = new Map<string, ModalModel>();
+
+/** Numbers JSON cannot hold (±Infinity, NaN) spelled out, so no two specs share a key. */
+const specKey = (spec: NetworkSpec) => JSON.stringify(spec, (_k, v) => (typeof v === 'number' && !Number.isFinite(v) ? `#${v}` : v));
+
+/**
+ * compileNetwork, remembered by the network's full description: the same spec always
+ * compiles to the same model (read-only), so an evaluation reuses the last ones' models.
+ */
+function compileShared(spec: NetworkSpec): ModalModel {
+  const key = specKey(spec);
+  let model = sharedModels.get(key);
+  if (model) {
+    // Most recently used last: the oldest is dropped first.
+    sharedModels.delete(key);
+  } else {
+    model = compileNetwork(spec);
+    if (sharedModels.size >= MAX_SHARED_MODELS) sharedModels.delete(sharedModels.keys().next().value!);
+  }
+  sharedModels.set(key, model);
+  return model;
+}
 
 /**
  * The compiled networks of a study. Sinks with natural convection make Rθsa depend on their
@@ -42,7 +66,7 @@ export function createStudyModel(doc: StudyDocument, tolerance: number): StudyMo
   const givenRsa = Float64Array.from(doc.sinks, (s) => s.rthKPerW);
   const network = buildStudyNetwork(doc, stages, givenRsa);
   const referenceSpec = network.spec;
-  const reference = compileNetwork(referenceSpec);
+  const reference = compileShared(referenceSpec);
   const index = (id: string) => reference.nodeIndex.get(id)!;
   const junction = network.junctions.map(index);
   const sink = doc.sinks.map((s) => index(sinkNodeId(s.id)));
@@ -74,7 +98,7 @@ export function createStudyModel(doc: StudyDocument, tolerance: number): StudyMo
     let model = cache.get(key);
     if (!model) {
       if (cache.size >= MAX_CACHED_MODELS) cache.clear();
-      model = compileNetwork(buildStudyNetwork(doc, stages, rsa).spec);
+      model = compileShared(buildStudyNetwork(doc, stages, rsa).spec);
       cache.set(key, model);
     }
     return model;
