@@ -52,7 +52,6 @@ export function selectRailTaps(doc: StudyDocument): RailSelection {
   const tapCount = model.taps.length;
   const passMembers = doc.devices.filter((d) => (d.electrical?.role ?? 'pass') === 'pass').map(member);
   const byId = new Map(doc.devices.map((d) => [d.id, d]));
-  const points = new Map<ProfileSegment, TapPoint[]>();
   /**
    * Points by what they depend on (fed devices, Vout, Iload; then tap by index): profiles
    * repeat their steps. Number keys, no key string per segment.
@@ -62,10 +61,6 @@ export function selectRailTaps(doc: StudyDocument): RailSelection {
   const warnings: string[] = [];
 
   function pointOn(segment: ProfileSegment, tap: number): TapPoint {
-    let list = points.get(segment);
-    if (!list) points.set(segment, (list = []));
-    const cached = list[tap];
-    if (cached) return cached;
     const drive = segment.railDrive!;
     const fedKey = drive.devices ? drive.devices.join(',') : '';
     let byVout = byValue.get(fedKey);
@@ -75,7 +70,7 @@ export function selectRailTaps(doc: StudyDocument): RailSelection {
     let byTap = byIload.get(drive.iloadA);
     if (!byTap) byIload.set(drive.iloadA, (byTap = []));
     const known = byTap[tap];
-    if (known) return (list[tap] = known);
+    if (known) return known;
     const members = drive.devices ? drive.devices.map((id) => member(byId.get(id)!)) : passMembers;
     const solve = (vin: number) => solveOperatingPoint({ vinV: vin, voutV: drive.voutV, iloadA: drive.iloadA }, members);
     // The tap's load is the load current; Iq (milliamperes) is left out, as in the map.
@@ -88,7 +83,6 @@ export function selectRailTaps(doc: StudyDocument): RailSelection {
       op = solve(vin);
     }
     const point = { vinV: vin, op, sensedV: plan.sensed === 'output' ? op.voutV : drive.voutV };
-    list[tap] = point;
     byTap[tap] = point;
     return point;
   }
