@@ -51,3 +51,45 @@ export function segmentPower(doc: StudyDocument, segment: ProfileSegment, fed: n
   });
   return { partPowerW, operatingPoint, fed };
 }
+
+function hasEntries(o: object): boolean {
+  for (const k in o) if (Object.prototype.hasOwnProperty.call(o, k)) return true;
+  return false;
+}
+
+/** Drive values whose dissipation a power cache holds before it starts again. */
+const MAX_CACHED_DRIVES = 4096;
+
+/**
+ * segmentPower remembered by drive value (Vin, Vout, Iload) for the segments it depends on
+ * nothing else for: no `devices` list (the pass devices are fed), no powerW entries, every
+ * device on. A long logged profile repeats its steps; the result is shared read-only.
+ */
+export function createSegmentPowerCache(doc: StudyDocument): (segment: ProfileSegment, fed: number[], on: ArrayLike<boolean>) => SegmentPower {
+  const byVin = new Map<number, Map<number, Map<number, SegmentPower>>>();
+  let size = 0;
+  return (segment, fed, on) => {
+    const e = segment.electrical;
+    let plain = e !== undefined && e.devices === undefined;
+    for (let i = 0; plain && i < on.length; i++) plain = on[i];
+    if (plain && hasEntries(segment.powerW)) plain = false;
+    if (!plain) return segmentPower(doc, segment, fed, on);
+    const drive = e!;
+    let byVout = byVin.get(drive.vinV);
+    if (!byVout) byVin.set(drive.vinV, (byVout = new Map()));
+    let byIload = byVout.get(drive.voutV);
+    if (!byIload) byVout.set(drive.voutV, (byIload = new Map()));
+    let p = byIload.get(drive.iloadA);
+    if (!p) {
+      if (size >= MAX_CACHED_DRIVES) {
+        byVin.clear();
+        size = 0;
+        return segmentPower(doc, segment, fed, on);
+      }
+      p = segmentPower(doc, segment, fed, on);
+      byIload.set(drive.iloadA, p);
+      size++;
+    }
+    return p;
+  };
+}

@@ -3,7 +3,7 @@ import { shutdownWatch } from '../electrical';
 import type { StudyModel } from './study-model';
 import type { EventLog } from './event-log';
 import { boundsFor, notePower, observeStretch, sampleState, type Observer } from './observer';
-import { fedDevices, segmentPower, type SegmentPower } from './segment-power';
+import { createSegmentPowerCache, fedDevices, type SegmentPower } from './segment-power';
 import { logDriveEvents } from './drive-events';
 import type { SoaTracker } from './soa-tracker';
 import { MAX_TOGGLES_PER_PIECE } from './constants';
@@ -46,6 +46,7 @@ export function createStepper(sm: StudyModel, observer: Observer | null, events:
   const on = doc.devices.map(() => true);
   const shutdown = doc.devices.flatMap((d, i) => (d.electrical?.thermalShutdown ? [i] : []));
   const fedCache = new Map<number, number[]>();
+  const powerFor = createSegmentPowerCache(doc);
   let power: SegmentPower | null = null;
   let powerSegment = -1;
   const powerOn = on.slice();
@@ -68,7 +69,7 @@ export function createStepper(sm: StudyModel, observer: Observer | null, events:
     const segment = doc.profile.segments[segmentIndex];
     let fed = fedCache.get(segmentIndex);
     if (!fed) fedCache.set(segmentIndex, (fed = fedDevices(doc, segment)));
-    power = segmentPower(doc, segment, fed, on);
+    power = powerFor(segment, fed, on);
     powerSegment = segmentIndex;
     on.forEach((v, i) => (powerOn[i] = v));
     for (let d = 0; d < m; d++) u[d] = power.partPowerW[d] * doc.devices[d].count;
