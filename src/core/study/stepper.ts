@@ -45,7 +45,8 @@ export function createStepper(sm: StudyModel, observer: Observer | null, events:
   const rsaUsed = new Float64Array(doc.sinks.length);
   const on = doc.devices.map(() => true);
   const shutdown = doc.devices.flatMap((d, i) => (d.electrical?.thermalShutdown ? [i] : []));
-  const fedCache = new Map<number, number[]>();
+  /** Fed devices by segment index (an array: a long profile would fill a map one entry per segment). */
+  const fedCache: number[][] = [];
   const powerFor = createSegmentPowerCache(doc);
   let power: SegmentPower | null = null;
   let powerSegment = -1;
@@ -64,14 +65,19 @@ export function createStepper(sm: StudyModel, observer: Observer | null, events:
     suggested = Infinity;
   }
 
+  function sameOn(): boolean {
+    for (let i = 0; i < m; i++) if (on[i] !== powerOn[i]) return false;
+    return true;
+  }
+
   function updatePower(segmentIndex: number): SegmentPower {
-    if (power && powerSegment === segmentIndex && on.every((v, i) => v === powerOn[i])) return power;
+    if (power && powerSegment === segmentIndex && sameOn()) return power;
     const segment = doc.profile.segments[segmentIndex];
-    let fed = fedCache.get(segmentIndex);
-    if (!fed) fedCache.set(segmentIndex, (fed = fedDevices(doc, segment)));
+    let fed = fedCache[segmentIndex];
+    if (!fed) fedCache[segmentIndex] = fed = fedDevices(doc, segment);
     power = powerFor(segment, fed, on);
     powerSegment = segmentIndex;
-    on.forEach((v, i) => (powerOn[i] = v));
+    for (let i = 0; i < m; i++) powerOn[i] = on[i];
     for (let d = 0; d < m; d++) u[d] = power.partPowerW[d] * doc.devices[d].count;
     return power;
   }
