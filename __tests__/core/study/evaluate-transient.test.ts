@@ -1,4 +1,6 @@
 import { buildStudyNetwork, evaluateStudy, packageStages, parseStudy, type StudyResult } from '@/core/study';
+import { SERIES_BUCKET_TOL_K } from '@/core/study/constants';
+import { bucketsForPoints } from '@/core/study/series-recorder';
 import { compileNetwork, fosterZth, simulateTrapezoidal } from '@/core/thermal';
 import { assertInDelta } from '../../helpers/assert-in-delta';
 import { seededRandom } from '../../helpers/seeded-random';
@@ -128,5 +130,40 @@ describe('evaluateStudy transients', () => {
     const k = j.valueC.indexOf(Math.max(...j.valueC));
     expect(j.valueC[k]).toBe(r.devices.Q1.peakJunctionC);
     expect(j.timeS[k]).toBe(r.devices.Q1.peakTimeS);
+  });
+
+  it('keeps each chart bucket’s maximum within SERIES_BUCKET_TOL_K of the exact one on the event-driven path', () => {
+    // Reference: the batch path's bucket maxima, the thermal core's exact peak search over each
+    // bucket's pieces (roots of the derivative, PHYSICS.md §3); the event-driven path may settle
+    // a bucket from its stretch bounds, on the cool side by at most the tolerance.
+    const rand = seededRandom(17);
+    const study = twoDeviceStudy();
+    study.profile.segments = Array.from({ length: 3000 }, () => ({ durationS: 0.02 + 0.3 * rand(), powerW: { Q1: 40 * rand(), Q2: 12 * rand() } }));
+    const doc = parseStudy(study);
+    const points = 202;
+    const buckets = bucketsForPoints(points);
+    const bucketS = doc.profile.segments.reduce((a, s) => a + s.durationS, 0) / buckets;
+    const maxima = (r: StudyResult, key: string) => {
+      const out = new Float64Array(buckets).fill(-Infinity);
+      const { timeS, valueC } = r.series![key];
+      timeS.forEach((t, i) => {
+        const b = Math.min(buckets - 1, Math.floor(t / bucketS));
+        out[b] = Math.max(out[b], valueC[i]);
+      });
+      return out;
+    };
+    const batch = evaluateStudy(doc, { seriesPoints: points });
+    const stepped = evaluateStudy(doc, { seriesPoints: points, forceEventDriven: true });
+    expect(batch.solver.method).toBe('batch');
+    for (const key of ['Q1.junction', 'Q1.case', 'Q2.junction', 'Q2.case', 'S1.sink']) {
+      const exact = maxima(batch, key);
+      const settled = maxima(stepped, key);
+      for (let b = 0; b < buckets; b++) {
+        expect(settled[b]).toBeLessThanOrEqual(exact[b] + 1e-9);
+        expect(settled[b]).toBeGreaterThanOrEqual(exact[b] - SERIES_BUCKET_TOL_K - 1e-9);
+      }
+    }
+    // The overall peaks stay exact.
+    for (const id of ['Q1', 'Q2']) assertInDelta(stepped.devices[id].peakJunctionC, batch.devices[id].peakJunctionC, 1e-9, `${id} peak`);
   });
 });

@@ -40,6 +40,8 @@ describe('stretch bounds', () => {
     const model = compileNetwork({ nodes, links, heatInputs: ['n0', 'n4'] });
     const bounds = createStretchBounds(model);
     let settled = 0;
+    let interior = 0;
+    const reached = new Float64Array(2);
     for (let trial = 0; trial < 60; trial++) {
       const T = Float64Array.from(nodes, () => 20 + 100 * rand());
       const u = [50 * rand(), 30 * rand(), 25];
@@ -47,17 +49,27 @@ describe('stretch bounds', () => {
       bounds.load(T, u, h);
       for (let k = 0; k < nodes.length; k++) {
         for (const tol of [1e-3, 1e-6]) {
-          const hot = bounds.maxWithin(k, tol);
+          const hot = bounds.maxWithin(k, tol, reached);
           if (Number.isNaN(hot)) continue;
           settled++;
           const peak = peakInSegment(model, T, u, h, k).valueC;
           expect(hot).toBeGreaterThanOrEqual(peak - 1e-9);
           expect(hot).toBeLessThanOrEqual(peak + tol + 1e-9);
+          // The point reached lies on the exact curve, within tol below its maximum.
+          const [value, tau] = reached;
+          expect(tau).toBeGreaterThanOrEqual(0);
+          expect(tau).toBeLessThanOrEqual(h);
+          expect(Math.abs(value - advance(model, T, u, tau)[k])).toBeLessThanOrEqual(1e-9 * Math.max(1, Math.abs(value)));
+          expect(value).toBeGreaterThanOrEqual(peak - tol - 1e-9);
+          expect(value).toBeLessThanOrEqual(peak + 1e-9);
+          if (tau > 0 && tau < h) interior++;
           for (let s = 0; s <= 40; s++) expect(hot).toBeGreaterThanOrEqual(advance(model, T, u, (h * s) / 40)[k] - 1e-9);
         }
       }
     }
     // Most stretches settle without the exact search (the point of the method).
     expect(settled).toBeGreaterThan(0.9 * 60 * 6 * 2);
+    // Some maxima lie inside the stretch, where the point reached is a midpoint of the search.
+    expect(interior).toBeGreaterThan(0);
   });
 });

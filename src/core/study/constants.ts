@@ -33,6 +33,12 @@ export const MAX_SOLVED_PIECES = 50_000_000;
 /** Chart series: at most this many points per node. */
 export const DEFAULT_SERIES_POINTS = 2000;
 
+/**
+ * Chart series: a bucket's highest value may lie this far below the true maximum inside it,
+ * K (a hundredth of a pixel on any chart here). The nodes' overall peaks are exact.
+ */
+export const SERIES_BUCKET_TOL_K = 1e-2;
+
 /** Events kept in the result list; later ones are only counted. */
 export const MAX_LISTED_EVENTS = 2000;
 

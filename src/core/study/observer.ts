@@ -4,6 +4,7 @@ import { createSeriesRecorder, type SeriesRecorder } from './series-recorder';
 import { createBoundaryWriter, type BoundaryWriter } from './boundary-table';
 import { createStretchBounds, type StretchBounds } from './stretch-bounds';
 import type { JunctionHistory } from './junction-history';
+import { SERIES_BUCKET_TOL_K } from './constants';
 
 /** Chart and CSV names of the watched nodes, in watch order: junctions, cases, sinks, enclosure. */
 export function watchedNodes(sm: StudyModel): { keys: string[]; nodes: number[] } {
@@ -156,6 +157,24 @@ export function boundsFor(model: ModalModel): StretchBounds {
   return b;
 }
 
+const reached = new Float64Array(2);
+
+/**
+ * Adds a chart point within SERIES_BUCKET_TOL_K of the stretch's maximum of watched node w,
+ * from the stretch bounds alone (a point on the exact curve, met by their branch and bound);
+ * false when the exact search has to run: the bounds did not settle, or the node is a
+ * junction whose interior peaks feed the lifetime count.
+ */
+function bucketMaxWithin(obs: Observer, bounds: StretchBounds, w: number, t: number, h: number, devices: number): boolean {
+  if (obs.history && w % 2 === 0 && w < 2 * devices) return false;
+  const node = obs.nodes[w];
+  // The ends are sampled anyway (this stretch's start, the next one's start or the final sample).
+  if (bounds.upper(node) - bounds.endMax(node) <= SERIES_BUCKET_TOL_K) return true;
+  if (Number.isNaN(bounds.maxWithin(node, SERIES_BUCKET_TOL_K, reached))) return false;
+  if (reached[1] > 0 && reached[1] < h) obs.series!.add(w, t + reached[1], reached[0]);
+  return true;
+}
+
 export function observeStretch(
   obs: Observer,
   sm: StudyModel,
@@ -175,8 +194,9 @@ export function observeStretch(
   const devices = sm.doc.devices.length;
   for (let w = 0; w < nodes.length; w++) {
     const upper = bounds.upper(nodes[w]) + BOUND_SLACK_K;
-    // The exact search runs only where it could raise the peak or the chart bucket's maximum.
-    if (upper > obs.peakC[w] || (series && upper > series.maxAt(w, t))) {
+    // The exact search runs only where it could raise the peak, or the chart bucket's
+    // maximum when the bounds cannot settle that to SERIES_BUCKET_TOL_K.
+    if (upper > obs.peakC[w] || (series && upper > series.maxAt(w, t) && !bucketMaxWithin(obs, bounds, w, t, h, devices))) {
       const pk = peakInSegment(model, T, u, h, nodes[w]);
       offerPeak(obs, w, t + pk.timeS, pk.valueC, ambientC, () => advance(model, T, u, pk.timeS, scratch));
       if (series && pk.timeS > 0 && pk.timeS < h) series.add(w, t + pk.timeS, pk.valueC);

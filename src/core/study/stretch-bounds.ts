@@ -16,9 +16,11 @@ export type StretchBounds = {
   /**
    * The node's maximum over the stretch to within tolK on the hot side (never below it), by
    * branch and bound on the same bounds over halved sub-stretches; NaN when that would take
-   * more than MAX_BOUND_STEPS steps (the exact search must run).
+   * more than MAX_BOUND_STEPS steps (the exact search must run). With `reached`, also the
+   * highest value the search met on the curve and its time in the stretch ([value, τ]): a
+   * point of the solution within tolK below the maximum.
    */
-  maxWithin(node: number, tolK: number): number;
+  maxWithin(node: number, tolK: number, reached?: Float64Array): number;
 };
 
 /** Sub-stretches maxWithin may bound before it gives up. */
@@ -100,7 +102,7 @@ export function createStretchBounds(model: ModalModel): StretchBounds {
    * below both lines T(t0) + smax (t − t0) and T(t1) − smin (t1 − t), whose lower envelope
    * peaks at an end or where they cross.
    */
-  function maxWithin(node: number, tolK: number): number {
+  function maxWithin(node: number, tolK: number, reached?: Float64Array): number {
     let v = 0;
     for (let j = 0; j < q; j++) v += D[node * q + j] * uRef[j];
     for (let i = 0; i < n; i++) {
@@ -113,7 +115,10 @@ export function createStretchBounds(model: ModalModel): StretchBounds {
     stack[top++] = hRef;
     decayAt(0, 0);
     decayAt(hRef, n);
-    let best = Math.max(valueAt(v, 0), valueAt(v, n));
+    const atStart = valueAt(v, 0);
+    const atEnd = valueAt(v, n);
+    let best = atStart >= atEnd ? atStart : atEnd;
+    let bestAt = atStart >= atEnd ? 0 : hRef;
     let settled = -Infinity;
     for (let steps = 0; top > 0; steps++) {
       if (steps > MAX_BOUND_STEPS || top + 4 > stack.length) return NaN;
@@ -159,11 +164,18 @@ export function createStretchBounds(model: ModalModel): StretchBounds {
         ends[next + i] = e;
       }
       const m = valueAt(v, e1);
-      if (m > best) best = m;
+      if (m > best) {
+        best = m;
+        bestAt = mid;
+      }
       stack[top++] = t0;
       stack[top++] = mid;
       stack[top++] = mid;
       stack[top++] = t1;
+    }
+    if (reached) {
+      reached[0] = best;
+      reached[1] = bestAt;
     }
     return Math.max(best, settled);
   }
