@@ -1,4 +1,5 @@
-import { allowedCurrent, soaBoundary, type SoaParameters } from '@/core/soa';
+import { allowedCurrent, checkOperatingPoints, soaBoundary, type SoaParameters } from '@/core/soa';
+import { seededRandom } from '../../helpers/seeded-random';
 import { assertInDelta } from '../../helpers/assert-in-delta';
 
 // Hand-worked construction of PHYSICS.md §4 (bipolar SOA on log-log axes):
@@ -137,5 +138,37 @@ describe('soaBoundary on a parametric bipolar SOA', () => {
     const thermal = b.segments.find((s) => s.limit === 'thermal')!;
     assertInDelta(thermal.points[0].vceV, 50 / 15, 1e-9, 'corner at 75 °C');
     assertInDelta(thermal.points[thermal.points.length - 1].vceV, 64.8, 1e-9, 'crossing at 75 °C');
+  });
+});
+
+describe('checkOperatingPoints on a parametric SOA', () => {
+  it('gives each point the same allowed current and limit as allowedCurrent on the boundary pieces', () => {
+    // Reference: allowedCurrent, the lowest of the boundary's straight pieces (PHYSICS.md §4);
+    // checkOperatingPoints takes the same lines without building the pieces, so the bits agree.
+    const rand = seededRandom(23);
+    const pulsed: SoaParameters = {
+      ...model,
+      icPulseMaxA: 25,
+      zthJc: [
+        { rKPerW: 0.3, tauS: 0.0005 },
+        { rKPerW: 1.2, tauS: 0.02 },
+      ],
+      secondBreakdown: { ...model.secondBreakdown!, pulses: [{ pulseS: 0.01, referenceIcA: 3 }, { pulseS: 0.001, referenceIcA: 6 }, { pulseS: 0.001, referenceIcA: 5 }] },
+    };
+    for (const m of [model, pulsed, { ...model, secondBreakdown: undefined }]) {
+      const points = Array.from({ length: 400 }, (_, i) => ({
+        timeS: i,
+        durationS: i % 5 === 0 ? 0 : Math.pow(10, -5 + 6 * rand()),
+        vceV: i % 37 === 0 ? 0 : i % 41 === 0 ? 120 : 110 * rand(),
+        icA: 0.01 + 5 * rand(),
+        caseC: i % 53 === 0 ? 160 : -20 + 150 * rand(),
+      }));
+      const check = checkOperatingPoints(m, points);
+      points.forEach((p, k) => {
+        const a = allowedCurrent(m, p.vceV, { caseC: p.caseC, pulseS: p.durationS === 0 ? Number.MIN_VALUE : check.pulses[k] });
+        expect(check.allowedA[k]).toBe(a.currentA);
+        expect(check.limits[k]).toBe(a.limit);
+      });
+    }
   });
 });

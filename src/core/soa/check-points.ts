@@ -3,8 +3,9 @@ import { checkNumber } from './check';
 import { checkSoaModel } from './check-model';
 import { LINEAR_MODE_MESSAGE, needsLinearModeWarning } from './linear-mode';
 import { pulseFor } from './pulse-for';
+import { parameterAllowed } from './parameter-pieces';
 import { soaPieces } from './soa-pieces';
-import type { PulseWidth, SoaCheck, SoaLimit, SoaModel, SoaOperatingPoint, SoaWarning, SoaWorstPoint } from './types';
+import type { AllowedCurrent, PulseWidth, SoaCheck, SoaCondition, SoaLimit, SoaModel, SoaOperatingPoint, SoaWarning, SoaWorstPoint } from './types';
 
 const finiteAtLeast = (v: unknown, min: number) => typeof v === 'number' && Number.isFinite(v) && v >= min;
 
@@ -24,6 +25,13 @@ function checkedPulse(model: SoaModel, p: SoaOperatingPoint, k: number): PulseWi
   const pulse = pulseFor(model, p.durationS);
   checkCondition({ caseC: p.caseC, pulseS: pulse === 0 ? Number.MIN_VALUE : pulse }, path);
   return pulse;
+}
+
+/** The allowed current at a point (a parametric model without building its pieces: this runs per point). */
+function allowedAt(model: SoaModel, cond: SoaCondition, vceV: number): AllowedCurrent {
+  if (model.kind === 'parameters') return parameterAllowed(model, cond, vceV);
+  const { pieces, vceMaxV } = soaPieces(model, cond);
+  return lowestLimit(pieces, vceMaxV, vceV);
 }
 
 /**
@@ -48,8 +56,7 @@ export function checkOperatingPoints(model: SoaModel, points: readonly SoaOperat
     const pulse = checkedPulse(model, p, k);
     // A zero-length stretch is a pulse of no width: nothing heats, only the current and voltage limits apply.
     const cond = { caseC: p.caseC, pulseS: pulse === 0 ? Number.MIN_VALUE : pulse };
-    const { pieces, vceMaxV } = soaPieces(model, cond);
-    const a = lowestLimit(pieces, vceMaxV, p.vceV);
+    const a = allowedAt(model, cond, p.vceV);
     allowedA[k] = a.currentA;
     limits[k] = a.limit;
     pulses[k] = pulse;
