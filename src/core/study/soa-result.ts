@@ -47,13 +47,19 @@ export function deviceSoaResult(device: Device, index: number, acc: SoaAccumulat
   const model = device.soa!;
   const merged = acc.points();
   const check = withDevicePath(index, () => checkOperatingPoints(model, merged));
-  const all = merged.map((p, k) => pointResult(p, check, k));
-  const worst = check.worst ? all[check.worst.index] : null;
-  const listed =
-    all.length <= MAX_LISTED_SOA_POINTS
-      ? all
-      : [...all].sort((a, b) => a.margin - b.margin || a.timeS - b.timeS).slice(0, MAX_LISTED_SOA_POINTS);
-  listed.sort((a, b) => a.timeS - b.timeS);
+  // The lowest margins (earliest first among equals) are listed, in time order; only they
+  // (and the worst point) become result objects.
+  const n = merged.length;
+  const order = Array.from({ length: n }, (_, k) => k);
+  const chosen = n <= MAX_LISTED_SOA_POINTS ? order : order.sort((a, b) => check.margin[a] - check.margin[b] || merged[a].timeS - merged[b].timeS).slice(0, MAX_LISTED_SOA_POINTS);
+  const made = new Map<number, SoaPointResult>();
+  const resultOf = (k: number) => {
+    let r = made.get(k);
+    if (!r) made.set(k, (r = pointResult(merged[k], check, k)));
+    return r;
+  };
+  const listed = chosen.map(resultOf).sort((a, b) => a.timeS - b.timeS);
+  const worst = check.worst ? resultOf(check.worst.index) : null;
   const failedPoints = check.failedCount + acc.droppedFailed;
   const warnings: DeviceSoaResult['warnings'] = [];
   if (acc.linearMode.stretches > 0) {
@@ -67,7 +73,7 @@ export function deviceSoaResult(device: Device, index: number, acc: SoaAccumulat
     distinctPoints: merged.length + acc.droppedPoints,
     failedPoints,
     points: listed,
-    pointsListedAll: listed.length === all.length && acc.droppedPoints === 0,
+    pointsListedAll: listed.length === n && acc.droppedPoints === 0,
     worst,
     warnings,
     boundaries: worst ? withDevicePath(index, () => boundaries(model, worst, listed)) : null,

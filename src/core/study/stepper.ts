@@ -52,6 +52,8 @@ export function createStepper(sm: StudyModel, observer: Observer | null, events:
   let powerSegment = -1;
   const powerOn = on.slice();
   let suggested = Infinity;
+  /** Devices tripping or resuming at the end of the current stretch (one list, refilled). */
+  const tripped: number[] = [];
 
   const rsaLow = new Float64Array(doc.sinks.length).fill(Infinity);
   const rsaHigh = new Float64Array(doc.sinks.length).fill(-Infinity);
@@ -82,15 +84,22 @@ export function createStepper(sm: StudyModel, observer: Observer | null, events:
     return power;
   }
 
+  /** The stretch length whose end state `trial` holds (NaN when it holds none). */
+  let trialFor = NaN;
+
   /** Longest stretch from T (at most h) over which Rθsa stays within tolerance. */
   function convectionStep(model: ModalModel, h: number, ambientC: number): number {
+    trialFor = NaN;
     if (sm.nonLinearSinks.length === 0) return h;
     let step = Math.min(h, suggested);
     const floor = h * MIN_SPLIT_FRACTION;
     while (step > floor) {
       advance(model, T, u, step, trial);
       advance(model, T, u, step / 2, mid);
-      if (sm.rsaMismatch(trial, ambientC, rsaUsed) <= sm.tolerance && sm.rsaMismatch(mid, ambientC, rsaUsed) <= sm.tolerance) break;
+      if (sm.rsaMismatch(trial, ambientC, rsaUsed) <= sm.tolerance && sm.rsaMismatch(mid, ambientC, rsaUsed) <= sm.tolerance) {
+        trialFor = step;
+        break;
+      }
       step /= 2;
     }
     suggested = step < h ? step * 2 : Infinity;
@@ -110,7 +119,7 @@ export function createStepper(sm: StudyModel, observer: Observer | null, events:
         if (rsaUsed[i] > rsaHigh[i]) rsaHigh[i] = rsaUsed[i];
       }
       let step = convectionStep(model, end - t, ambientC);
-      let tripped: number[] = [];
+      tripped.length = 0;
       const bounds = boundsFor(model);
       if (shutdown.length > 0) bounds.load(T, u, step);
       for (const d of shutdown) {
@@ -122,7 +131,8 @@ export function createStepper(sm: StudyModel, observer: Observer | null, events:
         if (tc === null) continue;
         if (tc < step) {
           step = tc;
-          tripped = [d];
+          tripped.length = 0;
+          tripped.push(d);
         } else if (tc === step) tripped.push(d);
       }
       ++self.stretches;
@@ -140,7 +150,9 @@ export function createStepper(sm: StudyModel, observer: Observer | null, events:
         const drive = doc.profile.segments[segmentIndex].electrical;
         if (drive) logDriveEvents(doc, events, p, drive.vinV, drive.voutV, drive.iloadA, t, step);
       }
-      advance(model, T, u, step, T);
+      // The convection check solved this very stretch already (same model, state and inputs).
+      if (step === trialFor) T.set(trial);
+      else advance(model, T, u, step, T);
       const last = tripped.length === 0 && step >= end - t;
       t = last ? end : t + step;
       // The crossing was found on the exact solution, so the state flips even when rounding leaves Tj a hair short of the level.
