@@ -152,7 +152,7 @@ export function createBatchRunner(sm: StudyModel, observer: Observer | null, eve
     for (let k = 0; k < count; k++) {
       const u = inputs.subarray(k * q, (k + 1) * q);
       observeStretch(obs, sm, model, T, u, times[k], durations[k], inputs[k * q + m], scratch);
-      soa?.stretch(model, T, u, times[k], durations[k], segmentOf[k], powers[k], allOn);
+      soa?.stretch(model, T, u, times[k], durations[k], segmentOf[k], powers[k], allOn, true);
       advance(model, T, u, durations[k], T);
     }
     count = 0;

@@ -18,7 +18,8 @@ export type SoaTracker = {
   /** Devices tracked (indices into doc.devices) and their accumulators, in device order. */
   devices: number[];
   accumulators: SoaAccumulator[];
-  stretch(model: ModalModel, T: ArrayLike<number>, u: ArrayLike<number>, t: number, h: number, segmentIndex: number, power: SegmentPower, on: ArrayLike<boolean>): void;
+  /** `boundsLoaded`: the model's stretch bounds already hold this stretch (T, u, h), as the observer leaves them. */
+  stretch(model: ModalModel, T: ArrayLike<number>, u: ArrayLike<number>, t: number, h: number, segmentIndex: number, power: SegmentPower, on: ArrayLike<boolean>, boundsLoaded?: boolean): void;
   /** Closes the open stretches; a periodic run joins its last stretch to its first when they continue each other. */
   finish(endS: number): void;
 };
@@ -80,7 +81,7 @@ export function createSoaTracker(sm: StudyModel): SoaTracker | null {
     return Math.max(atLeast, best);
   }
 
-  function stretch(model: ModalModel, T: ArrayLike<number>, u: ArrayLike<number>, t: number, h: number, segmentIndex: number, power: SegmentPower, on: ArrayLike<boolean>): void {
+  function stretch(model: ModalModel, T: ArrayLike<number>, u: ArrayLike<number>, t: number, h: number, segmentIndex: number, power: SegmentPower, on: ArrayLike<boolean>, boundsLoaded = false): void {
     if (h === 0) return;
     const drive = doc.profile.segments[segmentIndex].electrical;
     const op = power.operatingPoint;
@@ -88,7 +89,7 @@ export function createSoaTracker(sm: StudyModel): SoaTracker | null {
     pieceT = T;
     pieceU = u;
     pieceH = h;
-    loaded = false;
+    loaded = boundsLoaded;
     for (let k = 0; k < devices.length; k++) {
       const d = devices[k];
       const conducts = drive && op && !op.outputOff && on[d] && op.partCurrentA > 0 && power.fed.includes(d);

@@ -145,7 +145,8 @@ export function createStepper(sm: StudyModel, observer: Observer | null, events:
         observeStretch(observer, sm, model, T, u, t, step, ambientC, scratch);
         notePower(observer, p.partPowerW, step);
       }
-      soa?.stretch(model, T, u, t, step, segmentIndex, p, on);
+      // observeStretch leaves the bounds loaded with this stretch.
+      soa?.stretch(model, T, u, t, step, segmentIndex, p, on, observer !== null);
       if (events) {
         const drive = doc.profile.segments[segmentIndex].electrical;
         if (drive) logDriveEvents(doc, events, p, drive.vinV, drive.voutV, drive.iloadA, t, step);
