@@ -1,5 +1,5 @@
 import { getIn, setIn } from 'formik';
-import { useEffect, useState, type RefObject } from 'react';
+import { useEffect, useRef, useState, type RefObject } from 'react';
 
 import type { StudyDocument } from '@/core/study';
 
@@ -14,8 +14,17 @@ export type EditorCheck = {
   parsed: { document: StudyDocument; raw: RawDocument } | null;
 };
 
-/** How long typing may pause before the document is checked again, ms. */
+/**
+ * How long typing may pause before the document is checked again, ms. An edit after a longer
+ * pause is checked at once (the next task), so a single change reaches the results without
+ * waiting; the keystrokes of a burst are checked once it pauses.
+ */
 export const CHECK_DELAY_MS = 100;
+
+/** When the check of an edit made at `at` runs, ms from then: at once after a pause since `lastChange`, else after CHECK_DELAY_MS. */
+export const checkDelay = (at: number, lastChange: number) => (at - lastChange >= CHECK_DELAY_MS ? 0 : CHECK_DELAY_MS);
+
+const now = () => globalThis.performance?.now() ?? Date.now();
 
 /**
  * Everything wrong with the values: each numeric field whose text does not read (with the
@@ -54,18 +63,22 @@ export type EditorCheckState = EditorCheck & {
 
 const sameProblems = (a: readonly Problem[], b: readonly Problem[]) => a.length === b.length && a.every((p, i) => p.field === b[i].field && p.reason === b[i].reason);
 
-/** Checks the values a moment after each change (the fields on screen are known by then). */
+/** Checks the values after each change (the fields on screen are known by then): at once after a pause, else once typing pauses. */
 export function useEditorCheck(values: EditorValues, fields: RefObject<Map<string, FieldMeta>>, base: EditorValues): EditorCheckState {
   const [state, setState] = useState<EditorCheckState>(() => {
     const first = checkValues(values, new Map());
     return { ...first, lastGood: first.parsed };
   });
+  const lastChange = useRef(-Infinity);
   useEffect(() => {
+    const at = now();
+    const delay = checkDelay(at, lastChange.current);
+    lastChange.current = at;
     const timer = setTimeout(() => {
       const next = checkValues(values, fields.current ?? new Map(), base);
       // The same findings keep the same list, so the fields reading them do not draw again.
       setState((prev) => ({ ...next, problems: sameProblems(prev.problems, next.problems) ? prev.problems : next.problems, lastGood: next.parsed ?? prev.lastGood }));
-    }, CHECK_DELAY_MS);
+    }, delay);
     return () => clearTimeout(timer);
   }, [values, fields, base]);
   return state;
