@@ -1,10 +1,19 @@
 import { act, renderHook } from '@testing-library/react-native';
 
 import { evaluateStudy, parseStudy } from '@/core/study';
-import type { SolveReply, SolveRequest } from '@/features/results/solve-outcome';
+import type { SolveOutcome, SolveReply, SolveRequest } from '@/features/results/solve-outcome';
 import { solveDocument } from '@/features/results/solve-outcome';
+import type { SolverChannel } from '@/features/results/solver-channel';
 import { useSolve, type SolveState } from '@/features/results/use-solve';
-import { workerChannel, type WorkerLike } from '@/features/results/worker-channel';
+import { useStudyResult, type StudyResultState } from '@/features/results/use-study-result';
+import { RESTART_COST_MS, workerChannel, type WorkerLike } from '@/features/results/worker-channel';
+
+/** When set, the hooks' solver channel (a worker channel on fake workers); otherwise the platform's. */
+let mockChannel: (() => SolverChannel) | null = null;
+jest.mock('@/features/results/solver-channel', () => {
+  const actual = jest.requireActual('@/features/results/solver-channel');
+  return { ...actual, createSolverChannel: () => (mockChannel ?? actual.createSolverChannel)() };
+});
 
 /** A one-device study of a lumped part on a sink at constant power (invented demo data). */
 function study(powerW: number) {
@@ -39,12 +48,16 @@ class FakeWorker implements WorkerLike {
   terminate() {
     this.terminated = true;
   }
-  answer(index: number) {
+  /** Answers a request as solver.worker.ts does: the verdict line first when asked, then the outcome (`solveMs` as given). */
+  answer(index: number, solveMs?: number) {
     const { id, raw, options } = this.requests[index];
-    const reply: SolveReply = structuredClone({ id, outcome: solveDocument(raw, options) });
-    this.onmessage?.({ data: reply });
+    const send = (reply: SolveReply) => this.onmessage?.({ data: structuredClone(reply) });
+    const outcome = solveDocument(raw, options, options.verdictFirst ? (ahead) => send({ id, ahead }) : undefined);
+    send({ id, outcome, ...(solveMs !== undefined ? { solveMs } : {}) });
   }
 }
+
+const peakOf = (outcome: SolveOutcome) => (outcome.kind === 'ok' ? outcome.result.devices.Q1.peakJunctionC : NaN);
 
 describe('solving off the render path', () => {
   beforeEach(() => {
@@ -85,6 +98,120 @@ describe('solving off the render path', () => {
     expect(seen).toHaveLength(1);
     worker.answer(1);
     expect(seen).toEqual([seen[0], expect.closeTo(steadyJunctionC(30), 3)]);
+  });
+
+  it('lets a solve expected to end within the restart cost finish, then sends the newer request to the same worker', () => {
+    const channel = workerChannel(() => new FakeWorker());
+    const seen: number[] = [];
+    const done = (o: SolveOutcome) => seen.push(peakOf(o));
+    channel.solve(study(10), {}, done);
+    // The worker's own time for the first solve: well under the cost of starting a fresh one.
+    FakeWorker.made[0].answer(0, RESTART_COST_MS / 3);
+    channel.solve(study(20), {}, done);
+    channel.solve(study(30), {}, done);
+    channel.solve(study(40), {}, done);
+    const worker = FakeWorker.made[0];
+    expect(FakeWorker.made).toHaveLength(1);
+    expect(worker.terminated).toBe(false);
+    // Only the latest of the waiting requests is sent, once the one in flight has answered (its reply dropped).
+    expect(worker.requests).toHaveLength(2);
+    worker.answer(1);
+    expect(worker.requests).toHaveLength(3);
+    worker.answer(2);
+    expect(seen).toHaveLength(2);
+    expect(seen[0]).toBeCloseTo(steadyJunctionC(10), 3);
+    expect(seen[1]).toBeCloseTo(steadyJunctionC(40), 3);
+  });
+
+  it('ends a long solve for a newer request and keeps a spare worker ready for the next time', () => {
+    jest.useFakeTimers();
+    try {
+      const channel = workerChannel(() => new FakeWorker());
+      const seen: number[] = [];
+      const done = (o: SolveOutcome) => seen.push(peakOf(o));
+      channel.solve(study(10), {}, done);
+      FakeWorker.made[0].answer(0, 10 * RESTART_COST_MS);
+      channel.solve(study(20), {}, done);
+      channel.solve(study(30), {}, done);
+      const [first, second] = FakeWorker.made;
+      expect(first.terminated).toBe(true);
+      expect(second.requests).toHaveLength(1);
+      second.answer(0, 10 * RESTART_COST_MS);
+      expect(seen[1]).toBeCloseTo(steadyJunctionC(30), 3);
+      // Once idle, a spare is started; the next restart takes it instead of starting one then.
+      jest.runAllTimers();
+      expect(FakeWorker.made).toHaveLength(3);
+      const spare = FakeWorker.made[2];
+      expect(spare.requests).toHaveLength(0);
+      channel.solve(study(25), {}, done);
+      channel.solve(study(35), {}, done);
+      expect(second.terminated).toBe(true);
+      expect(FakeWorker.made).toHaveLength(3);
+      spare.answer(0);
+      expect(seen[2]).toBeCloseTo(steadyJunctionC(35), 3);
+      channel.close();
+      expect(spare.terminated).toBe(true);
+    } finally {
+      jest.useRealTimers();
+    }
+  });
+
+  it('hands over the verdict line ahead of the full result when asked, and drops an outdated one', () => {
+    const channel = workerChannel(() => new FakeWorker());
+    const events: string[] = [];
+    const ahead = (summary: { verdict: { headline: string } }) => events.push(`ahead ${summary.verdict.headline.split(':')[0]}`);
+    const done = (o: SolveOutcome) => events.push(`done ${o.kind} ${peakOf(o).toFixed(3)}`);
+    channel.solve(study(10), { verdictFirst: true }, done, ahead);
+    FakeWorker.made[0].answer(0);
+    // Tj = 25 + 10 W × 2 K/W = 45 °C, below the 150 °C Tj,max less the default 20 K margin (Ohm's law for heat, common practice).
+    expect(events).toEqual(['ahead Passes', `done ok ${steadyJunctionC(10).toFixed(3)}`]);
+    // Superseded before its worker's time is known: that worker is ended and its late replies, verdict line included, are dropped.
+    channel.solve(study(100), { verdictFirst: true }, done, ahead);
+    channel.solve(study(20), { verdictFirst: true }, done, ahead);
+    FakeWorker.made[0].answer(1);
+    expect(events).toHaveLength(2);
+    FakeWorker.made[1].answer(0);
+    expect(events.slice(2)).toEqual(['ahead Passes', `done ok ${steadyJunctionC(20).toFixed(3)}`]);
+    // A verdict-only solve answers the line alone, without the result of every segment.
+    const only: SolveOutcome[] = [];
+    channel.solve(study(100), { verdictOnly: true }, (o) => only.push(o));
+    FakeWorker.made[1].answer(1);
+    // Tj = 25 + 100 W × 2 K/W = 225 °C: above the 130 °C target, so it fails.
+    expect(only).toHaveLength(1);
+    expect(only[0].kind).toBe('verdict');
+    expect(only[0].kind === 'verdict' && only[0].summary.verdict.passes).toBe(false);
+    expect('result' in only[0]).toBe(false);
+  });
+
+  it('shows the new verdict line with the last full result until the new full result lands (verdictFirst)', async () => {
+    mockChannel = () => workerChannel(() => new FakeWorker());
+    try {
+      const first = study(10);
+      const second = study(100);
+      const { result, rerender } = renderHook<StudyResultState, { raw: object }>(({ raw }) => useStudyResult(raw, 0, true), { initialProps: { raw: first } });
+      await act(async () => FakeWorker.made[0].answer(0));
+      expect(result.current.kind).toBe('ok');
+      rerender({ raw: second });
+      const worker = FakeWorker.made[0];
+      // Hold the full result back: the verdict line alone arrives first.
+      const full = worker.onmessage!;
+      let held: SolveReply | null = null;
+      worker.onmessage = (event) => ('ahead' in event.data ? full(event) : (held = event.data));
+      await act(async () => worker.answer(1));
+      const early = result.current;
+      // Tj = 25 + 100 W × 2 K/W = 225 °C, above the 130 °C target: the line fails while the curves still show 10 W (Ohm's law for heat, common practice).
+      expect(early.kind).toBe('verdict');
+      if (early.kind !== 'verdict') return;
+      expect(early.summary.verdict.passes).toBe(false);
+      expect(early.updating).toBe(true);
+      expect(early.previous?.devices.Q1.peakJunctionC).toBeCloseTo(steadyJunctionC(10), 3);
+      await act(async () => full({ data: held! }));
+      const landed = result.current;
+      expect(landed.kind === 'ok' && landed.result.devices.Q1.peakJunctionC).toBeCloseTo(steadyJunctionC(100), 3);
+      expect(landed.kind === 'ok' && landed.updating).toBe(false);
+    } finally {
+      mockChannel = null;
+    }
   });
 
   it('solves on the main thread when the worker cannot load', () => {

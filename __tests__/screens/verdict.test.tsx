@@ -1,5 +1,6 @@
 import { evaluateStudy, parseStudy } from '@/core/study';
 import { studyVerdict } from '@/features/results/verdict';
+import { verdictSummary } from '@/features/results/verdict-summary';
 
 import labSupply from '../../examples/lab-supply-two-tap.json';
 
@@ -30,5 +31,21 @@ describe('studyVerdict', () => {
     expect(verdict.passes).toBe(false);
     expect(verdict.headline).toMatch(/^Fails: Q1 is outside its derated SOA at /);
     expect(verdict.headline).toMatch(/% of the allowed current/);
+  });
+
+  it('sends the same answer in the verdict line a worker hands over ahead of the full result', () => {
+    const weak = structuredClone(labSupply) as typeof labSupply;
+    weak.devices[0].soa.icMaxA = 0.5;
+    weak.devices[0].soa.icPulseMaxA = 0.8;
+    const result = solve(weak);
+    const summary = verdictSummary(result);
+    expect(summary.verdict.passes).toBe(false);
+    expect(summary.verdict.headline).toBe(studyVerdict(result).headline);
+    // The SOA check's line closes the notes, as in the full results.
+    expect(summary.verdict.notes[summary.verdict.notes.length - 1]).toMatch(/^SOA check fails for Q1/);
+    expect(summary.warnings).toEqual(result.warnings);
+    expect(summary.ownWarnings.every((w) => result.warnings.includes(w))).toBe(true);
+    // Far smaller than the result it summarises, so it is cheap to send (structured clone of plain data).
+    expect(JSON.stringify(summary).length).toBeLessThan(JSON.stringify(result).length / 10);
   });
 });

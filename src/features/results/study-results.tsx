@@ -19,9 +19,8 @@ import { UpdatingNote } from './components/updating-note';
 import { VerdictPanel } from './components/verdict-panel';
 import { curvesCsv, curvesFileName } from '@/charts/curves-csv';
 import { mainsCaution, type MainsCaution } from './mains-hint';
-import { shownElsewhere, soaSummary } from './soa-text';
 import { useStudyResult } from './use-study-result';
-import { studyVerdict } from './verdict';
+import type { VerdictSummary } from './verdict-summary';
 
 export type StudyResultsProps = {
   /** The saved study document, as the API returns it. */
@@ -30,32 +29,30 @@ export type StudyResultsProps = {
   onPickTime?: (timeS: number) => void;
   /** Chart points per node to solve for (the core's default without it); the live editor asks for fewer. */
   seriesPoints?: number;
+  /** Show the verdict line as soon as the worker has it, the curves and tables once the full result follows (the live editor). */
+  verdictFirst?: boolean;
 };
 
-type SolvedProps = { result: StudyResult; mains: MainsCaution | null; onPickTime?: (timeS: number) => void };
+type SolvedProps = { summary: VerdictSummary; result: StudyResult | null; mains: MainsCaution | null; onPickTime?: (timeS: number) => void };
+type DetailsProps = { result: StudyResult; mains: MainsCaution | null; onPickTime?: (timeS: number) => void };
 
 /**
- * The verdict follows each result at once; the curves, tables and panels below follow a moment
- * later (a deferred render React may interrupt), so the verdict and the fields never wait on them.
+ * The verdict follows each result at once (with `verdictFirst`, ahead of it); the curves, tables
+ * and panels below follow a moment later (a deferred render React may interrupt), so the
+ * verdict and the fields never wait on them.
  */
-function Solved({ result, mains, onPickTime }: SolvedProps) {
-  const verdict = useMemo(() => {
-    const v = studyVerdict(result);
-    const soa = soaSummary(result.soa);
-    return soa ? { ...v, notes: [...v.notes, soa] } : v;
-  }, [result]);
-  // Warnings the SOA and rail-plan panels show in full are not repeated above the curves.
-  const warnings = useMemo(() => result.warnings.filter((w) => !shownElsewhere(w, result.soa, Boolean(result.railPlan))), [result]);
+function Solved({ summary, result, mains, onPickTime }: SolvedProps) {
   const details = useDeferredValue(result);
   return (
     <>
-      <VerdictPanel verdict={verdict} warnings={warnings} />
-      <Details result={details} mains={mains} onPickTime={onPickTime} />
+      {/* Warnings the SOA and rail-plan panels show in full are not repeated above the curves. */}
+      <VerdictPanel verdict={summary.verdict} warnings={summary.ownWarnings} />
+      {details ? <Details result={details} mains={mains} onPickTime={onPickTime} /> : null}
     </>
   );
 }
 
-const Details = memo(function Details({ result, mains, onPickTime }: SolvedProps) {
+const Details = memo(function Details({ result, mains, onPickTime }: DetailsProps) {
   const wide = useIsWide();
   const [cursorS, setCursorS] = useState<number | null>(null);
   const devices = useMemo(() => Object.values(result.devices), [result]);
@@ -126,8 +123,8 @@ const Details = memo(function Details({ result, mains, onPickTime }: SolvedProps
 });
 
 /** The study's answer, solved in the client: verdict, heat curves, per-device and per-sink peaks, events. */
-export const StudyResults = memo(function StudyResults({ document, onPickTime, seriesPoints }: StudyResultsProps) {
-  const state = useStudyResult(document, seriesPoints);
+export const StudyResults = memo(function StudyResults({ document, onPickTime, seriesPoints, verdictFirst }: StudyResultsProps) {
+  const state = useStudyResult(document, seriesPoints, verdictFirst);
   const mains = useMemo(() => mainsCaution(document), [document]);
   if (state.kind === 'empty') return null;
   return (
@@ -137,7 +134,8 @@ export const StudyResults = memo(function StudyResults({ document, onPickTime, s
       {state.kind === 'invalid' ? <Text tone="muted">No results: the saved document could not be read (see the design inputs).</Text> : null}
       {state.kind === 'failed' ? <InlineAlert message={`The study could not be solved: ${state.message}`} /> : null}
       {state.kind !== 'solving' && state.updating ? <UpdatingNote /> : null}
-      {state.kind === 'ok' ? <Solved result={state.result} mains={mains} onPickTime={onPickTime} /> : null}
+      {/* One element for both states, so the curves and tables stay mounted when the full result follows its verdict. */}
+      {state.kind === 'ok' || state.kind === 'verdict' ? <Solved summary={state.summary} result={state.kind === 'ok' ? state.result : state.previous} mains={mains} onPickTime={onPickTime} /> : null}
     </Card>
   );
 });

@@ -1,16 +1,19 @@
 import { useMemo } from 'react';
 
-import type { StudyDocument, StudyResult } from '@/core/study';
+import type { StudyResult } from '@/core/study';
 
 import type { SolveOutcome } from './solve-outcome';
 import { useSolve } from './use-solve';
+import type { VerdictSummary } from './verdict-summary';
 
 export type StudyResultState =
   | { kind: 'empty' }
   | { kind: 'solving' }
   | { kind: 'invalid'; message: string; updating?: boolean }
   | { kind: 'failed'; message: string; updating?: boolean }
-  | { kind: 'ok'; document: StudyDocument; result: StudyResult; updating?: boolean };
+  | { kind: 'ok'; summary: VerdictSummary; result: StudyResult; updating?: boolean }
+  /** `verdictFirst`: the new document's verdict line while its full result is on the way (`updating`); `previous` is the last full result. */
+  | { kind: 'verdict'; summary: VerdictSummary; previous: StudyResult | null; updating: boolean };
 
 // Keyed by the document object (the query cache hands back the same object until it changes), per chart resolution.
 const caches = new Map<string, WeakMap<object, SolveOutcome>>();
@@ -32,18 +35,26 @@ function isEmpty(raw: unknown): raw is null | undefined {
  * Solves a study document in the client with the core's own pipeline, off the render path (a
  * Web Worker on the web). Each document object is solved once; while a newer one is solved
  * the last result stays on screen, marked `updating`. `seriesPoints` bounds the chart series
- * (the core's default without it).
+ * (the core's default without it); `verdictFirst` shows the new verdict line as soon as the
+ * worker has it, ahead of the full result (the `verdict` state).
  */
-export function useStudyResult(raw: unknown, seriesPoints?: number): StudyResultState {
+export function useStudyResult(raw: unknown, seriesPoints?: number, verdictFirst = false): StudyResultState {
   const key = typeof raw === 'object' && raw !== null && !isEmpty(raw) ? raw : null;
-  const options = useMemo(() => (seriesPoints === undefined ? {} : { seriesPoints }), [seriesPoints]);
+  const options = useMemo(() => ({ ...(seriesPoints === undefined ? {} : { seriesPoints }), ...(verdictFirst ? { verdictFirst } : {}) }), [seriesPoints, verdictFirst]);
   const { solved, known, remember } = seriesPoints === undefined ? DEFAULT_CACHE : cacheFor(seriesPoints);
   const state = useSolve(key, options, true, known, remember);
 
   if (isEmpty(raw)) return { kind: 'empty' };
   if (key === null) return { kind: 'invalid', message: 'the study document must be a JSON object' };
   const cached = solved.get(key);
-  if (cached) return cached;
-  if (state.outcome) return { ...state.outcome, updating: state.updating };
+  if (cached) return asState(cached, false);
+  if (state.ahead) return { kind: 'verdict', summary: state.ahead, previous: state.outcome?.kind === 'ok' ? state.outcome.result : null, updating: true };
+  if (state.outcome) return asState(state.outcome, state.updating);
   return { kind: 'solving' };
+}
+
+function asState(outcome: SolveOutcome, updating: boolean): StudyResultState {
+  // Not asked for here (`verdictOnly`), but a verdict-only outcome is complete as it is.
+  if (outcome.kind === 'verdict') return { kind: 'verdict', summary: outcome.summary, previous: null, updating };
+  return { ...outcome, updating };
 }

@@ -265,7 +265,7 @@ const LiveResults = memo(function LiveResults({ raw, stale }: { raw: RawDocument
   return (
     <View style={styles.live}>
       {stale ? <InlineAlert tone="info" message={raw ? 'Results are from the last inputs without problems; fix the problems listed to update them.' : 'Results appear once the inputs have no problems.'} /> : null}
-      {raw ? <StudyResults document={raw} seriesPoints={LIVE_SERIES_POINTS} /> : null}
+      {raw ? <StudyResults document={raw} seriesPoints={LIVE_SERIES_POINTS} verdictFirst /> : null}
     </View>
   );
 });

@@ -1,8 +1,5 @@
-import { useMemo } from 'react';
-
 import { useSolve } from '@/features/results/use-solve';
-import { soaSummary } from '@/features/results/soa-text';
-import { studyVerdict, type Verdict } from '@/features/results/verdict';
+import type { Verdict } from '@/features/results/verdict';
 
 import type { RawDocument } from './types';
 
@@ -11,8 +8,8 @@ export type LiveVerdict =
   | { kind: 'ok'; verdict: Verdict; warnings: readonly string[]; updating: boolean }
   | { kind: 'failed'; message: string; updating: boolean };
 
-/** The verdict needs no chart series. */
-const VERDICT_ONLY = { seriesPoints: 0 };
+/** The verdict line alone: no chart series, and the worker sends back only the line, not the result of every segment. */
+const VERDICT_ONLY = { seriesPoints: 0, verdictOnly: true };
 
 /**
  * The verdict of the checked document, solved off the render path (a Web Worker on the web);
@@ -20,14 +17,8 @@ const VERDICT_ONLY = { seriesPoints: 0 };
  */
 export function useLiveVerdict(raw: RawDocument | null, enabled: boolean): LiveVerdict {
   const { outcome, updating } = useSolve(raw, VERDICT_ONLY, enabled);
-  // The SOA check in a line under the verdict, as the full results give it.
-  const verdict = useMemo(() => {
-    if (outcome?.kind !== 'ok') return null;
-    const v = studyVerdict(outcome.result);
-    const soa = soaSummary(outcome.result.soa);
-    return soa ? { ...v, notes: [...v.notes, soa] } : v;
-  }, [outcome]);
   if (!outcome) return { kind: 'waiting' };
-  if (outcome.kind === 'ok') return { kind: 'ok', verdict: verdict!, warnings: outcome.result.warnings, updating };
+  // The SOA check is the verdict's last note, as the full results give it.
+  if (outcome.kind === 'ok' || outcome.kind === 'verdict') return { kind: 'ok', verdict: outcome.summary.verdict, warnings: outcome.summary.warnings, updating };
   return { kind: 'failed', message: outcome.message, updating };
 }
