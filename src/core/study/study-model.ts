@@ -79,6 +79,10 @@ export function createStudyModel(doc: StudyDocument, tolerance: number): StudyMo
   const logStep = Math.log1p(tolerance);
   const rsa = new Float64Array(doc.sinks.length);
 
+  /** The Rθsa level (steps of the tolerance from the given value) per non-linear sink last asked for, and its model. */
+  const levels = new Float64Array(nonLinearSinks.length).fill(NaN);
+  let lastModel: ModalModel | null = null;
+
   const rise = (T: ArrayLike<number>, ambientC: number, i: number) => T[sink[i]] - (sinkTo[i] < 0 ? ambientC : T[sinkTo[i]]);
 
   function modelAt(T: ArrayLike<number>, ambientC: number, rsaOut?: Float64Array): ModalModel {
@@ -87,20 +91,27 @@ export function createStudyModel(doc: StudyDocument, tolerance: number): StudyMo
       rsaOut?.set(rsa);
       return reference;
     }
-    let key = '';
-    for (const i of nonLinearSinks) {
+    let same = lastModel !== null;
+    for (let j = 0; j < nonLinearSinks.length; j++) {
+      const i = nonLinearSinks[j];
       const exact = sinkRsa(doc.sinks[i], rise(T, ambientC, i));
       const k = Math.round(Math.log(exact / givenRsa[i]) / logStep);
       rsa[i] = givenRsa[i] * Math.exp(k * logStep);
-      key += `${k},`;
+      if (k !== levels[j]) same = false;
+      levels[j] = k;
     }
     rsaOut?.set(rsa);
+    // Consecutive stretches mostly stay on one Rθsa level: no key is built for them.
+    if (same) return lastModel!;
+    let key = '';
+    for (let j = 0; j < levels.length; j++) key += `${levels[j]},`;
     let model = cache.get(key);
     if (!model) {
       if (cache.size >= MAX_CACHED_MODELS) cache.clear();
       model = compileShared(buildStudyNetwork(doc, stages, rsa).spec);
       cache.set(key, model);
     }
+    lastModel = model;
     return model;
   }
 
