@@ -83,9 +83,6 @@ export function createStretchBounds(model: ModalModel): StretchBounds {
   const stack = new Float64Array(2 * (MAX_BOUND_STEPS + 2));
   /** e^(−λ_i t) at both ends of each stacked interval (2n per interval): each end's exponentials are computed once. */
   const ends = new Float64Array((MAX_BOUND_STEPS + 2) * 2 * n);
-  const decayAt = (t: number, at: number) => {
-    for (let i = 0; i < n; i++) ends[at + i] = Math.exp(-rates[i] * t);
-  };
   const valueAt = (v: number, at: number) => {
     let s = v;
     for (let i = 0; i < n; i++) s += coef[i] * ends[at + i];
@@ -113,8 +110,11 @@ export function createStretchBounds(model: ModalModel): StretchBounds {
     let top = 0;
     stack[top++] = 0;
     stack[top++] = hRef;
-    decayAt(0, 0);
-    decayAt(hRef, n);
+    // e^(−λ·0) = 1 and e^(−λh), the latter as load computed it (the same expression, the same bits).
+    for (let i = 0; i < n; i++) {
+      ends[i] = 1;
+      ends[n + i] = decay[i];
+    }
     const atStart = valueAt(v, 0);
     const atEnd = valueAt(v, n);
     let best = atStart >= atEnd ? atStart : atEnd;
