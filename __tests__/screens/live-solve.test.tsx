@@ -2,7 +2,7 @@ import { act, renderHook } from '@testing-library/react-native';
 
 import { evaluateStudy, parseStudy } from '@/core/study';
 import type { SolveOutcome, SolveReply, SolveRequest } from '@/features/results/solve-outcome';
-import { solveDocument } from '@/features/results/solve-outcome';
+import { receivedDocument, solveDocument } from '@/features/results/solve-outcome';
 import type { SolverChannel } from '@/features/results/solver-channel';
 import { useSolve, type SolveState } from '@/features/results/use-solve';
 import { useStudyResult, type StudyResultState } from '@/features/results/use-study-result';
@@ -34,7 +34,10 @@ const steadyJunctionC = (powerW: number) => 25 + powerW * (0.5 + 0.5 + 1);
 /** A Web Worker stand-in that holds its requests until the test answers them, in any order. */
 class FakeWorker implements WorkerLike {
   static made: FakeWorker[] = [];
+  /** The requests as posted, and as the worker reads them (kept parts filled in from the request before). */
+  posted: SolveRequest[] = [];
   requests: SolveRequest[] = [];
+  private before: unknown = null;
   terminated = false;
   onmessage: WorkerLike['onmessage'] = null;
   onerror: WorkerLike['onerror'] = null;
@@ -43,7 +46,12 @@ class FakeWorker implements WorkerLike {
   }
   postMessage(request: SolveRequest) {
     // Through structured clone, as a real worker receives it (HTML standard, structured serialisation).
-    this.requests.push(structuredClone(request));
+    const received = structuredClone(request);
+    this.posted.push(received);
+    // As solver.worker.ts reads it.
+    const raw = receivedDocument(received, this.before);
+    this.before = raw;
+    this.requests.push({ ...received, raw });
   }
   terminate() {
     this.terminated = true;
@@ -212,6 +220,29 @@ describe('solving off the render path', () => {
     } finally {
       mockChannel = null;
     }
+  });
+
+  it('does not copy the parts an edit left alone to the worker again, and solves the same', () => {
+    const channel = workerChannel(() => new FakeWorker());
+    const seen: number[] = [];
+    const first = study(10);
+    channel.solve(first, {}, (o) => seen.push(peakOf(o)));
+    const worker = FakeWorker.made[0];
+    worker.answer(0);
+    // An edit of the ambient, as the form makes it: a new document and ambient, the other parts the same objects.
+    const edited = { ...first, ambient: { temperatureC: 45 } };
+    channel.solve(edited, {}, (o) => seen.push(peakOf(o)));
+    expect(worker.posted[0].kept).toBeUndefined();
+    expect(worker.posted[1].kept).toEqual(['sinks', 'devices', 'profile']);
+    expect(worker.posted[1].raw).not.toHaveProperty('profile');
+    expect(worker.requests[1].raw).toEqual(edited);
+    worker.answer(1);
+    // 20 K more ambient, 20 K more at the junction: Tj = 45 + 10 W × 2 K/W (Ohm's law for heat, common practice).
+    expect(seen[1]).toBeCloseTo(steadyJunctionC(10) + 20, 3);
+    // A fresh worker gets the whole document.
+    channel.solve(study(20), {}, () => undefined);
+    channel.solve({ ...edited, ambient: { temperatureC: 30 } }, {}, () => undefined);
+    expect(FakeWorker.made[1].posted[0].kept).toBeUndefined();
   });
 
   it('solves on the main thread when the worker cannot load', () => {

@@ -45,8 +45,38 @@ export function solveDocument(raw: unknown, options: SolveOptions = {}, ahead?: 
   return { kind: 'ok', summary, result };
 }
 
-/** A request to the solver worker and its reply; `id` tells a reply to the latest request from an outdated one. */
-export type SolveRequest = { id: number; raw: unknown; options: SolveOptions };
+/**
+ * A request to the solver worker; `id` tells a reply to the latest request from an outdated one.
+ * `kept` names the document's top-level parts (the profile of a long log, say) that are the
+ * same objects as in the request before to the same worker: they are left out of `raw` and the
+ * worker takes its own copy from that request (`receivedDocument`), so an edit elsewhere does
+ * not copy them across again.
+ */
+export type SolveRequest = { id: number; raw: unknown; options: SolveOptions; kept?: string[] };
+
+type Parts = Record<string, unknown>;
+const isParts = (value: unknown): value is Parts => typeof value === 'object' && value !== null && !Array.isArray(value);
+
+/** What to post for `raw` when `before` was the document of the request before to the same worker (null for a fresh worker). */
+export function requestParts(raw: unknown, before: unknown): { raw: unknown; kept?: string[] } {
+  if (!isParts(raw) || !isParts(before)) return { raw };
+  const sent: Parts = {};
+  const kept: string[] = [];
+  for (const [key, value] of Object.entries(raw)) {
+    if (typeof value === 'object' && value !== null && before[key] === value) kept.push(key);
+    else sent[key] = value;
+  }
+  return kept.length > 0 ? { raw: sent, kept } : { raw };
+}
+
+/** The document a worker received: `request.raw` with its kept parts taken from the document of the request before (`before`). */
+export function receivedDocument(request: SolveRequest, before: unknown): unknown {
+  if (!request.kept || request.kept.length === 0) return request.raw;
+  if (!isParts(request.raw) || !isParts(before)) throw new Error('a request kept parts of a document this worker does not have');
+  const raw: Parts = { ...request.raw };
+  for (const key of request.kept) raw[key] = before[key];
+  return raw;
+}
 /**
  * The verdict line sent ahead of the outcome (`verdictFirst`), or the outcome; `solveMs`: how
  * long the worker took to parse and solve, ms.

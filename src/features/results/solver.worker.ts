@@ -1,14 +1,20 @@
-import { solveDocument, type SolveReply, type SolveRequest } from './solve-outcome';
+import { receivedDocument, solveDocument, type SolveReply, type SolveRequest } from './solve-outcome';
 
 /**
  * The study solver off the page's main thread (web): each request is parsed and solved with
  * the core's pipeline and answered with its id; with `verdictFirst` the verdict line goes
- * ahead of the full result. Replies are plain data (structured clone).
+ * ahead of the full result. Requests leave out the parts kept from the one before (`kept`).
+ * Replies are plain data (structured clone).
  */
 const scope = self as unknown as { onmessage: ((event: MessageEvent<SolveRequest>) => void) | null; postMessage: (reply: SolveReply) => void };
 
+/** The document of the last request, whose parts the next one may keep. */
+let before: unknown = null;
+
 scope.onmessage = (event) => {
-  const { id, raw, options } = event.data;
+  const { id, options } = event.data;
+  const raw = receivedDocument(event.data, before);
+  before = raw;
   const start = performance.now();
   const outcome = solveDocument(raw, options, options.verdictFirst ? (ahead) => scope.postMessage({ id, ahead }) : undefined);
   scope.postMessage({ id, outcome, solveMs: performance.now() - start });

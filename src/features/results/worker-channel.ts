@@ -1,4 +1,4 @@
-import type { SolveOptions, SolveReply, SolveRequest } from './solve-outcome';
+import { requestParts, type SolveOptions, type SolveReply, type SolveRequest } from './solve-outcome';
 import { mainThreadChannel, type SolverChannel } from './solver-channel';
 
 /** What the channel needs of a Web Worker (a test gives a fake one). */
@@ -55,6 +55,8 @@ export function workerChannel(start: () => WorkerLike | null): SolverChannel {
   let lastSolveMs: number | null = null;
   let latest = 0;
   let fallback: SolverChannel | null = null;
+  /** The document last posted, and to which worker: the parts a newer one shares with it are not copied again. */
+  let posted: { to: WorkerLike; raw: unknown } | null = null;
 
   const stop = () => {
     worker?.terminate();
@@ -128,7 +130,9 @@ export function workerChannel(start: () => WorkerLike | null): SolverChannel {
       if (pending) channel.solve(pending.raw, pending.options, pending.done, pending.ahead);
     };
     inFlight = { id, sentAt };
-    current.postMessage({ id, raw: request.raw, options: request.options });
+    const parts = requestParts(request.raw, posted?.to === current ? posted.raw : null);
+    posted = { to: current, raw: request.raw };
+    current.postMessage({ id, ...parts, options: request.options });
   };
 
   return {
