@@ -1,5 +1,6 @@
 import { solveOperatingPoint, type OperatingPoint, type PassMember } from '../electrical';
 import type { Device, ProfileSegment, StudyDocument } from './types';
+import { NO_POWER } from './parse-profile';
 
 const passDevices = new WeakMap<StudyDocument, number[]>();
 
@@ -53,6 +54,7 @@ export function segmentPower(doc: StudyDocument, segment: ProfileSegment, fed: n
 }
 
 function hasEntries(o: object): boolean {
+  if (o === NO_POWER) return false;
   for (const k in o) if (Object.prototype.hasOwnProperty.call(o, k)) return true;
   return false;
 }

@@ -152,8 +152,9 @@ export function createStepper(sm: StudyModel, observer: Observer | null, events:
         if (drive) logDriveEvents(doc, events, p, drive.vinV, drive.voutV, drive.iloadA, t, step);
       }
       // The convection check solved this very stretch already (same model, state and inputs).
-      if (step === trialFor) T.set(trial);
-      else advance(model, T, u, step, T);
+      if (step === trialFor) {
+        for (let i = 0; i < N; i++) T[i] = trial[i];
+      } else advance(model, T, u, step, T);
       const last = tripped.length === 0 && step >= end - t;
       t = last ? end : t + step;
       // The crossing was found on the exact solution, so the state flips even when rounding leaves Tj a hair short of the level.
