@@ -48,8 +48,24 @@ describe('rankingSetupFromStudy', () => {
 
   it('refuses a slot it cannot model, naming the field', () => {
     expect(() => rankingSetupFromStudy(study(), 'XX')).toThrow('sinkId: the study has no sink "XX"');
-    const boxed = study({ enclosure: { rthKPerW: 1, capacityJPerK: 10 } });
-    expect(() => rankingSetupFromStudy(boxed, 'HS')).toThrow('sinks.HS.to: leads to the enclosure');
+    const chassis = study({ sinks: [{ id: 'HS', rthKPerW: 1.4, capacityJPerK: 300, to: 'CH' }, { id: 'CH', rthKPerW: 0.5 }] });
+    expect(() => rankingSetupFromStudy(chassis, 'HS')).toThrow('sinks.HS.to: leads to sink "CH"; ranking models a sink that leads to the ambient or to the enclosure air');
+    expect(() => rankingSetupFromStudy(chassis, 'CH')).toThrow('sinks.HS.to: is mounted on "CH"');
+  });
+
+  it('leaves out the powers of devices on other sinks', () => {
+    // Per-part powers as an evaluation gives them, for every device of the study.
+    const doc = study({
+      sinks: [{ id: 'HS', rthKPerW: 1.4, capacityJPerK: 300 }, { id: 'H2', rthKPerW: 2 }],
+      devices: [
+        { id: 'Q1', tjMaxC: 150, sink: 'HS', package: { kind: 'lumped', rthKPerW: 0.8 }, interface: { rthKPerW: 0.3 } },
+        { id: 'Q2', tjMaxC: 150, sink: 'HS', package: { kind: 'lumped', rthKPerW: 1.2 }, interface: { rthKPerW: 0.5 } },
+        { id: 'Q9', tjMaxC: 150, sink: 'H2', package: { kind: 'lumped', rthKPerW: 1 }, interface: { rthKPerW: 0.2 } },
+      ],
+    });
+    const { setup } = rankingSetupFromStudy(doc, 'HS', [{ durationS: 10, powerW: { Q1: 4, Q2: 1, Q9: 7 } }]);
+    expect(setup.segments[0].powerW).toEqual({ Q1: 4, Q2: 1 });
+    expect(() => rankSinks(rankingSetupFromStudy(doc, 'HS', [{ durationS: 10, powerW: { Q7: 1 } }]).setup, [])).toThrow('setup.segments[0].powerW.Q7: no device has the id "Q7"');
   });
 
   it('holds a varying ambient at its highest value and says so', () => {

@@ -50,7 +50,45 @@ describe('requiredRsa', () => {
     expect(r.feasible).toBe(true);
   });
 
+  it('counts the enclosure air’s steady rise, P_total · Rθ(enclosure), in every headroom', () => {
+    // Thermal resistances in series (common practice): the whole 40 W crosses the enclosure
+    // wall, 40 × 0.5 = 20 K. With the devices of the case above, ambient 50 °C:
+    //   a: 125 − 50 − 20 − 20 = 35 K, b: 155 − 50 − 25 − 20 = 60 K → 35/40 = 0.875 K/W.
+    const r = requiredRsa(
+      [
+        { id: 'a', powerW: 20, rjcKPerW: 0.8, rcsKPerW: 0.2, tjTargetC: 125 },
+        { id: 'b', powerW: 10, rjcKPerW: 2, rcsKPerW: 0.5, tjTargetC: 155, count: 2 },
+      ],
+      50,
+      0.5,
+    );
+    assertNear(r.enclosureRiseK!, 20, 1e-12, 'enclosure rise');
+    assertNear(r.headroomK.a, 35, 1e-12, 'headroom a');
+    assertNear(r.headroomK.b, 60, 1e-12, 'headroom b');
+    assertNear(r.rsaKPerW, 0.875, 1e-12, 'Rsa');
+    expect(r.feasible).toBe(true);
+  });
+
+  it('says when the enclosure’s rise alone, or with the junction-to-sink path, leaves nothing for a sink', () => {
+    // 15 W × 7 K/W = 105 K > 130 − 40 = 90 K: the air alone is too hot.
+    const alone = requiredRsa([{ id: 'u1', powerW: 15, rjcKPerW: 1.5, rcsKPerW: 0.5, tjTargetC: 130 }], 40, 7);
+    expect(alone.feasible).toBe(false);
+    expect(alone.reason).toBe(
+      'device "u1": the enclosure air rises 105 K above the ambient (P_total·Rθ(enclosure) = 15 W × 7 K/W) in steady state, ' +
+        'which alone uses up the 90 K from ambient to target, so no sink can help: lower the power or the enclosure\'s Rθ ' +
+        '(vents, a larger housing), lower the ambient, or raise the target',
+    );
+    // 15 W × 4 K/W = 60 K, plus 15 W × 2 K/W = 30 K: together 90 K, all of it.
+    const both = requiredRsa([{ id: 'u1', powerW: 15, rjcKPerW: 1.5, rcsKPerW: 0.5, tjTargetC: 130 }], 40, 4);
+    expect(both.feasible).toBe(false);
+    assertNear(both.rsaKPerW, 0, 1e-12, 'Rsa');
+    expect(both.reason).toContain('junction to sink rises 30 K');
+    expect(both.reason).toContain('the enclosure air rises 60 K above the ambient');
+    expect(both.reason).toContain('together 90 K, at least the 90 K from ambient to target');
+  });
+
   it('names the field of bad input', () => {
+    expect(() => requiredRsa([{ id: 'q1', powerW: 1, rjcKPerW: 1, rcsKPerW: 0, tjTargetC: 100 }], 25, -1)).toThrow('enclosureRthKPerW: must be ≥ 0, got -1');
     expect(() => requiredRsa([{ id: 'q1', powerW: -1, rjcKPerW: 1, rcsKPerW: 0, tjTargetC: 100 }], 25)).toThrow('devices[0].powerW: must be ≥ 0');
     expect(() => requiredRsa([], 25)).toThrow('devices: needs at least 1 entry');
   });

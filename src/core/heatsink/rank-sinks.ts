@@ -52,6 +52,8 @@ export type RankingResult = {
   scenario: { airSpeedMPerS: number; ambientC: number; marginK: number; sortBy: SortKey };
   /** With a site: the altitude every candidate was ranked at and its factor on Rθsa. */
   site?: SiteDerating;
+  /** With an enclosure: the air the sink leads to, its Rθ to the room and heat capacity. */
+  enclosure?: { rthKPerW: number; capacityJPerK: number };
   /** Required Rθsa for the steady worst case. */
   required: SteadyRequirement;
   /** Passing (by sortBy), then failing (closest first), then excluded. */
@@ -71,16 +73,34 @@ export type RankingResult = {
   stats: { candidates: number; profileRuns: number; interiorSearches: number };
 };
 
-const ASSUMPTIONS = [
+const ASSUMPTIONS_BEFORE = [
   'Every candidate is simulated on the whole profile with its heat capacity (exact piecewise-constant modal solution).',
   `Peaks lie within ${PEAK_TOLERANCE_K} K below the exact modal solution.`,
   'A natural-convection rating Rsa,ref (ΔTref/ΔT)^n is applied to the whole catalogue value, radiation included.',
-  `A natural-convection sink is linearised at its time-averaged rise over the profile (fixed point to ${CONVECTION_REL_TOL * 100} % on Rθsa).`,
+];
+const ASSUMPTIONS_AFTER = [
   'Forced-air Rθsa is interpolated in log–log between catalogue points and held at the ends (flagged).',
   'A sink without a forced-air curve keeps its still-air Rθsa in moving air (conservative).',
+];
+const TO_AMBIENT = [
+  `A natural-convection sink is linearised at its time-averaged rise over the profile (fixed point to ${CONVECTION_REL_TOL * 100} % on Rθsa).`,
+  ...ASSUMPTIONS_AFTER,
   'The sink leads straight to a constant ambient; identical parts on it share their power equally.',
   'The steady answer holds every segment’s powers forever; thermal mass can only lower the peak below it.',
 ];
+const ASSUMPTIONS = [...ASSUMPTIONS_BEFORE, ...TO_AMBIENT];
+
+function enclosureAssumptions(e: { rthKPerW: number; capacityJPerK: number }): string[] {
+  const rth = Number(e.rthKPerW.toPrecision(4));
+  return [
+    ...ASSUMPTIONS_BEFORE,
+    `A natural-convection sink is linearised at its time-averaged rise above the enclosure air over the profile (fixed point to ${CONVECTION_REL_TOL * 100} % on Rθsa).`,
+    ...ASSUMPTIONS_AFTER,
+    `The sink leads to the enclosure air, one node of ${Number(e.capacityJPerK.toPrecision(4))} J/K with ${rth} K/W to a constant ambient; ` +
+      'no other sink heats that air; identical parts on the sink share their power equally.',
+    `The steady answer holds every segment’s powers forever, the enclosure air then at Ta + P_total × ${rth} K/W; thermal mass can only lower the peak below it.`,
+  ];
+}
 
 /** Ranks candidate sinks for a setup (see rankPrepared). */
 export function rankSinks(setup: RankingSetup, candidates: SinkCandidate[], options: RankingOptions = {}): RankingResult {
@@ -206,10 +226,11 @@ function rankChecked(prep: PreparedRanking, candidates: CheckedCandidate[], opti
     smallest,
     steadyChoice,
     thermalMassGain,
-    assumptions: site ? [...ASSUMPTIONS, siteAssumption(site)] : ASSUMPTIONS,
+    assumptions: [...(prep.enclosure ? enclosureAssumptions(prep.enclosure) : ASSUMPTIONS), ...(site ? [siteAssumption(site)] : [])],
     stats: { candidates: candidates.length, profileRuns, interiorSearches },
   };
   if (site) result.site = site;
+  if (prep.enclosure) result.enclosure = { ...prep.enclosure };
   if (passing.length === 0) result.message = noPassMessage(required, failing, excluded);
   return result;
 }

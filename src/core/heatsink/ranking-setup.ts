@@ -13,6 +13,12 @@ export type RankingDevice = {
   count?: number;
 };
 
+/**
+ * The air inside a housing that the sink sheds into: its Rθ to the room, K/W (as used: any
+ * site derating already applied), and the heat capacity of the air and walls, J/K (0: none).
+ */
+export type RankingEnclosure = { rthKPerW: number; capacityJPerK?: number };
+
 /** A constant-power stretch: watts in each part of the named devices (missing ones: 0 W). */
 export type RankingSegment = { durationS: number; powerW: Record<string, number> };
 
@@ -20,6 +26,8 @@ export type RankingSegment = { durationS: number; powerW: Record<string, number>
  * What the ranking simulates: the devices that share one sink, the power profile, the
  * ambient and the junction margin (target = Tj,max − margin). periodic: the profile repeats
  * forever (its periodic steady state); otherwise it starts with everything at ambient.
+ * enclosure: the sink leads to the enclosure air, one node between it and the ambient;
+ * without it the sink leads straight to the ambient.
  */
 export type RankingSetup = {
   devices: RankingDevice[];
@@ -27,6 +35,7 @@ export type RankingSetup = {
   periodic?: boolean;
   ambientC: number;
   marginK: number;
+  enclosure?: RankingEnclosure;
 };
 
 export type PreparedDevice = {
@@ -50,6 +59,8 @@ export type PreparedRanking = {
   periodic: boolean;
   ambientC: number;
   marginK: number;
+  /** The enclosure air the sink leads to (node ENCLOSURE_NODE_ID), or null: straight to the ambient. */
+  enclosure: { rthKPerW: number; capacityJPerK: number } | null;
   nodes: NodeSpec[];
   links: LinkSpec[];
   junctionIds: string[];
@@ -69,6 +80,16 @@ export type PreparedRanking = {
 };
 
 export const SINK_NODE_ID = 'sink';
+export const ENCLOSURE_NODE_ID = 'enclosure';
+
+function checkEnclosure(raw: unknown): PreparedRanking['enclosure'] {
+  if (raw === undefined) return null;
+  const e = checkObject(raw, 'setup.enclosure');
+  return {
+    rthKPerW: checkPositive(e.rthKPerW, 'setup.enclosure.rthKPerW'),
+    capacityJPerK: e.capacityJPerK === undefined ? 0 : checkNonNegative(e.capacityJPerK, 'setup.enclosure.capacityJPerK'),
+  };
+}
 
 function packageStages(model: PackageModel, path: string): CauerStage[] {
   const obj = checkObject(model, path);
@@ -98,6 +119,7 @@ export function prepareRanking(setup: RankingSetup): PreparedRanking {
   const root = checkObject(setup, 'setup');
   const ambientC = checkFinite(root.ambientC, 'setup.ambientC');
   const marginK = checkNonNegative(root.marginK, 'setup.marginK');
+  const enclosure = checkEnclosure(root.enclosure);
   const seen = new Set<string>();
   const devices = checkArray(root.devices, 'setup.devices', 1).map((raw, i): PreparedDevice => {
     const path = `setup.devices[${i}]`;
@@ -173,6 +195,7 @@ export function prepareRanking(setup: RankingSetup): PreparedRanking {
     periodic,
     ambientC,
     marginK,
+    enclosure,
     nodes,
     links,
     junctionIds,

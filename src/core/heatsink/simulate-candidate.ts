@@ -4,14 +4,17 @@ import type { RsaMode } from './candidate-rsa';
 import { CONVECTION_REL_TOL, MAX_CONVECTION_RUNS } from './constants';
 import { naturalConvectionRsa, naturalConvectionSteady } from './natural-convection';
 import { scanPeaks } from './peak-scan';
-import { SINK_NODE_ID, type PreparedRanking } from './ranking-setup';
+import { ENCLOSURE_NODE_ID, SINK_NODE_ID, type PreparedRanking } from './ranking-setup';
 import type { ScanProfile } from './scan-profile';
 import type { ScanWorkspace } from './scan-workspace';
 
 export type CandidateSimulation = {
   /** Rθsa the profile was simulated with, K/W. */
   rsaKPerW: number;
-  /** Time-averaged sink rise over the profile, K (energy balance of that run). */
+  /**
+   * Time-averaged sink rise over the profile above the node its Rθsa leads to (the ambient,
+   * or the enclosure air), K: Rθsa × the mean heat through it (energy balance of that run).
+   */
   meanRiseK: number;
   /** Profile runs made; settled is false when Rθsa still moved more than CONVECTION_REL_TOL. */
   runs: number;
@@ -28,6 +31,11 @@ export type CandidateSimulation = {
  * rise a single RC (R, C of sink and packages) would average under the mean power (in the
  * periodic case the exact value, R × mean power), then update R on the log scale as if the
  * mean rise were proportional to R, until R moves less than CONVECTION_REL_TOL.
+ *
+ * With an enclosure the sink leads to the enclosure air node (its capacity), which leads to
+ * the ambient; the rise is then the sink's above the enclosure air, as in the study's own
+ * convection (rise above the node the sink leads to). The node is added only then, so a sink
+ * that leads to the ambient costs what it did; a massless enclosure adds no mode.
  */
 export function simulateCandidate(
   prep: PreparedRanking,
@@ -36,13 +44,24 @@ export function simulateCandidate(
   mode: Exclude<RsaMode, { mode: 'none' }>,
   ws: ScanWorkspace,
 ): CandidateSimulation {
+  // The heat through Rθsa is the energy put in less what the devices and the sink stored (the
+  // enclosure air, last in the node list, lies beyond Rθsa).
   const capacities = prep.nodes.map((node) => node.capacityJPerK);
-  const spec = (rsa: number): NetworkSpec => ({
-    nodes: [...prep.nodes, { id: SINK_NODE_ID, capacityJPerK: candidate.capacityJPerK }],
-    links: [...prep.links, { a: SINK_NODE_ID, b: AMBIENT, rKPerW: rsa }],
-    heatInputs: prep.junctionIds,
-  });
   capacities.push(candidate.capacityJPerK);
+  const enclosure = prep.enclosure;
+  const sinkNode = { id: SINK_NODE_ID, capacityJPerK: candidate.capacityJPerK };
+  const spec = (rsa: number): NetworkSpec =>
+    enclosure
+      ? {
+          nodes: [...prep.nodes, sinkNode, { id: ENCLOSURE_NODE_ID, capacityJPerK: enclosure.capacityJPerK }],
+          links: [...prep.links, { a: SINK_NODE_ID, b: ENCLOSURE_NODE_ID, rKPerW: rsa }, { a: ENCLOSURE_NODE_ID, b: AMBIENT, rKPerW: enclosure.rthKPerW }],
+          heatInputs: prep.junctionIds,
+        }
+      : {
+          nodes: [...prep.nodes, sinkNode],
+          links: [...prep.links, { a: SINK_NODE_ID, b: AMBIENT, rKPerW: rsa }],
+          heatInputs: prep.junctionIds,
+        };
 
   const run = (rsa: number) => {
     const model = compileNetwork(spec(rsa));
