@@ -82,6 +82,56 @@ describe('team settings screen', () => {
     expect(await screen.findByText(/Saved\. Studies started from now on take these defaults/)).toBeVisible();
   });
 
+  it('shows another owner’s earlier save beside the typed changes and saves them on top when asked', async () => {
+    // Optimistic concurrency (common practice): the form names the version it read; a 409 keeps what was typed.
+    let puts = 0;
+    routeApi(mockedApi, {
+      'GET /session': () => ok(sessionAs('owner')),
+      'GET /teams/1/settings': () => ok(settingsBody({}, 3)),
+      'PUT /teams/1/settings': (body) =>
+        ++puts === 1
+          ? httpError(409, {
+              error: { code: 'version_conflict', message: 'Another owner saved the team settings first (now version 4); your changes are not saved yet' },
+              current: { ...settingsBody({ marginK: 30, marginSource: 'plant rule (demo data)' }, 4), updatedBy: { id: 99, name: 'Dana Other' } },
+            })
+          : ok(settingsBody(body as StudyDefaults, 5)),
+    });
+    renderApp('/team-settings');
+
+    fireEvent.changeText(await screen.findByLabelText('Margin (K)'), '25');
+    fireEvent.press(screen.getByRole('button', { name: 'Save team settings' }));
+    const conflict = await screen.findByTestId('team-settings-conflict');
+    expect(within(conflict).getByText(/^Dana Other saved the team settings first \(now version 4\)\. Your changes are still in the form/)).toBeVisible();
+    expect(within(conflict).getByText(/30 K/)).toBeVisible();
+    expect(mockedApi.put.mock.calls[0][1]).toMatchObject({ marginK: 25, baseVersion: 3 });
+    // What was typed stays.
+    expect(screen.getByLabelText('Margin (K)').props.value).toBe('25');
+
+    fireEvent.press(within(conflict).getByRole('button', { name: 'Save mine over theirs' }));
+    await waitFor(() => expect(mockedApi.put).toHaveBeenCalledTimes(2));
+    expect(mockedApi.put.mock.calls[1][1]).toMatchObject({ marginK: 25, baseVersion: 4 });
+    expect(await screen.findByText(/Saved\. Studies started from now on take these defaults/)).toBeVisible();
+    expect(screen.queryByTestId('team-settings-conflict')).toBeNull();
+  });
+
+  it('takes the other owner’s values into the form when asked', async () => {
+    routeApi(mockedApi, {
+      'GET /session': () => ok(sessionAs('owner')),
+      'GET /teams/1/settings': () => ok(settingsBody({}, 3)),
+      'PUT /teams/1/settings': () =>
+        httpError(409, { error: { code: 'version_conflict', message: 'Another owner saved first' }, current: settingsBody({ marginK: 30 }, 4) }),
+    });
+    renderApp('/team-settings');
+
+    fireEvent.changeText(await screen.findByLabelText('Margin (K)'), '25');
+    fireEvent.press(screen.getByRole('button', { name: 'Save team settings' }));
+    const conflict = await screen.findByTestId('team-settings-conflict');
+    fireEvent.press(within(conflict).getByRole('button', { name: 'Take their values' }));
+    await waitFor(() => expect(screen.queryByTestId('team-settings-conflict')).toBeNull());
+    expect(screen.getByLabelText('Margin (K)').props.value).toMatch(/^30/);
+    expect(mockedApi.put).toHaveBeenCalledTimes(1);
+  });
+
   it('asks for the source of a life-model value and shows the server’s field error', async () => {
     routeApi(mockedApi, {
       'GET /session': () => ok(sessionAs('owner')),

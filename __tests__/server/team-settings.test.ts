@@ -170,6 +170,31 @@ describe('new studies take the defaults', () => {
     await a.put(settingsUrl(otherTeamId)).send({});
   });
 
+  it('saves on top of the version read, and answers 409 with the current settings when another owner saved first', async () => {
+    // Optimistic concurrency (common practice, HTTP 409 Conflict per RFC 9110 §15.5.10): the later save names the version it read.
+    const [a, b] = [await signedIn(ctx.app, 'owner@b.test'), await signedIn(ctx.app, 'owner2@b.test')];
+    const read = (await a.get(settingsUrl(otherTeamId))).body;
+    const first = await a.put(settingsUrl(otherTeamId)).send({ marginK: 18, baseVersion: read.version });
+    expect(first.status).toBe(200);
+    expect(first.body.version).toBe(read.version + 1);
+    const late = await b.put(settingsUrl(otherTeamId)).send({ siteAltitudeM: 1200, baseVersion: read.version });
+    expect(late.status).toBe(409);
+    expect(late.body.error.code).toBe('version_conflict');
+    expect(late.body.error.message).toMatch(/Another owner saved the team settings first \(now version \d+\)/);
+    expect(late.body.current).toMatchObject({ version: read.version + 1, settings: { marginK: 18, siteAltitudeM: null } });
+    // Nothing of the late save was written.
+    expect((await a.get(settingsUrl(otherTeamId))).body.settings).toMatchObject({ marginK: 18, siteAltitudeM: null });
+    // Saved again on top of the current version, it goes through.
+    const retried = await b.put(settingsUrl(otherTeamId)).send({ marginK: 18, siteAltitudeM: 1200, baseVersion: late.body.current.version });
+    expect(retried.status).toBe(200);
+    expect(retried.body.settings).toMatchObject({ marginK: 18, siteAltitudeM: 1200 });
+    // A bad baseVersion is named.
+    const bad = await a.put(settingsUrl(otherTeamId)).send({ marginK: 18, baseVersion: 'latest' });
+    expect(bad.status).toBe(400);
+    expect(bad.body.error.details[0].path).toBe('baseVersion');
+    await a.put(settingsUrl(otherTeamId)).send({});
+  });
+
   it('copies the defaults a study was started with into its duplicate', async () => {
     const designer = await signedIn(ctx.app, 'designer@a.test');
     const original = (await designer.post('/api/studies').send({ title: 'To copy', teamId })).body.study;

@@ -9,6 +9,7 @@ import { invite, listInvitations, revokeInvitation } from '../services/invitatio
 import { membershipIn, requireRole } from '../services/permissions';
 import { changeRole, listMembers, removeMember } from '../services/team-service';
 import { getTeamSettings, updateTeamSettings } from '../services/team-settings-service';
+import { AppError } from '../errors';
 import { validateBody } from '../validate';
 import { idParam } from './params';
 
@@ -18,6 +19,20 @@ function loadTeam(req: Request, res: Response, next: NextFunction) {
   next();
 }
 const teamOf = (res: Response) => res.locals.teamId as number;
+
+/**
+ * `baseVersion` of a settings save (the version the owner read), kept apart from the settings:
+ * when given, the save must be on top of it. A body that is not an object is left to validateBody.
+ */
+function splitBaseVersion(raw: unknown): { baseVersion: number | undefined; body: unknown } {
+  if (raw === null || typeof raw !== 'object' || Array.isArray(raw) || !('baseVersion' in raw)) return { baseVersion: undefined, body: raw };
+  const { baseVersion, ...body } = raw as Record<string, unknown>;
+  if (typeof baseVersion !== 'number' || !Number.isInteger(baseVersion) || baseVersion < 0) {
+    const message = 'must be a whole number ≥ 0: the version of the settings the change was made on';
+    throw AppError.badRequest(`baseVersion: ${message}`, [{ path: 'baseVersion', message }]);
+  }
+  return { baseVersion, body };
+}
 
 export function teamsRouter(deps: Deps) {
   const { db } = deps;
@@ -60,7 +75,8 @@ export function teamsRouter(deps: Deps) {
   });
   router.put('/:teamId/settings', loadTeam, async (req, res) => {
     requireRole(membershipIn(authOf(res), teamOf(res)), ['owner'], 'Only owners change the team settings');
-    res.json(await updateTeamSettings(db, authOf(res), teamOf(res), validateBody(teamSettingsSchema, req.body)));
+    const { baseVersion, body } = splitBaseVersion(req.body);
+    res.json(await updateTeamSettings(db, authOf(res), teamOf(res), validateBody(teamSettingsSchema, body), baseVersion));
   });
 
   // Activity

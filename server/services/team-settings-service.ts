@@ -2,6 +2,7 @@ import type { Transaction } from 'sequelize';
 import { defaultSections, EMPTY_STUDY_DEFAULTS, type DefaultSections, type StudyDefaults } from '../../src/core/study';
 import type { TeamSettingsInput } from '../../src/validation/team-settings';
 import type { Db } from '../db';
+import { AppError } from '../errors';
 import { recordEvent } from './audit-service';
 import type { SessionView } from './auth-service';
 import { membershipIn, requireRole } from './permissions';
@@ -23,9 +24,9 @@ async function findRow(db: Db, teamId: number, transaction?: Transaction) {
 const complete = (stored: Partial<StudyDefaults> | null | undefined): StudyDefaults => ({ ...EMPTY_STUDY_DEFAULTS, ...(stored ?? {}) });
 
 /** Any member reads the team's defaults. */
-export async function getTeamSettings(db: Db, auth: SessionView, teamId: number): Promise<TeamSettingsView> {
+export async function getTeamSettings(db: Db, auth: SessionView, teamId: number, transaction?: Transaction): Promise<TeamSettingsView> {
   membershipIn(auth, teamId);
-  const row = await findRow(db, teamId);
+  const row = await findRow(db, teamId, transaction);
   return {
     teamId,
     settings: complete(row?.settings),
@@ -35,14 +36,25 @@ export async function getTeamSettings(db: Db, auth: SessionView, teamId: number)
   };
 }
 
-/** Owners replace the team's defaults; studies already started keep the values they hold. */
-export async function updateTeamSettings(db: Db, auth: SessionView, teamId: number, input: TeamSettingsInput): Promise<TeamSettingsView> {
+/**
+ * Owners replace the team's defaults; studies already started keep the values they hold. With
+ * `baseVersion` (the version the owner read) the save must be on top of it: another owner's
+ * save in between answers 409 `version_conflict` with the settings as they are now, and
+ * nothing is written.
+ */
+export async function updateTeamSettings(db: Db, auth: SessionView, teamId: number, input: TeamSettingsInput, baseVersion?: number): Promise<TeamSettingsView> {
   requireRole(membershipIn(auth, teamId), ['owner'], 'Only owners change the team settings');
   const next = complete(input as Partial<StudyDefaults>);
   await db.sequelize.transaction(async (transaction) => {
     // The team's row lock orders two owners saving at once (PostgreSQL); SQLite writes one at a time anyway.
     await db.models.Team.findByPk(teamId, { transaction, lock: transaction.LOCK.UPDATE });
     const row = await db.models.TeamSetting.findOne({ where: { teamId }, transaction });
+    const current = row?.version ?? 0;
+    if (baseVersion !== undefined && baseVersion !== current) {
+      throw new AppError(409, 'version_conflict', `Another owner saved the team settings first (now version ${current}); your changes are not saved yet`, undefined, {
+        current: await getTeamSettings(db, auth, teamId, transaction),
+      });
+    }
     const before = complete(row?.settings);
     const changed = (Object.keys(next) as (keyof StudyDefaults)[]).filter((k) => before[k] !== next[k]);
     if (changed.length === 0) return;

@@ -1,6 +1,7 @@
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
+import { isAxiosError } from 'axios';
 
-import { api } from '@/api';
+import { api, errorCode, errorStatus } from '@/api';
 import { sessionKey } from '@/features/auth/api';
 import type { Role } from '@/features/auth/types';
 import type { StudyDefaults } from '@/core/study';
@@ -90,10 +91,24 @@ export function useTeamSettings(teamId: number | undefined) {
 export function useSaveTeamSettings(teamId: number) {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: async (settings: StudyDefaults) => (await api.put<TeamSettings>(`${teamPath(teamId)}/settings`, settings)).data,
+    // baseVersion: the version the owner read; another owner's save in between answers 409 (conflictingSettings).
+    mutationFn: async ({ settings, baseVersion }: { settings: StudyDefaults; baseVersion: number }) =>
+      (await api.put<TeamSettings>(`${teamPath(teamId)}/settings`, { ...settings, baseVersion })).data,
     onSuccess: async (saved) => {
       queryClient.setQueryData(teamSettingsKey(teamId), saved);
       await queryClient.invalidateQueries({ queryKey: ['teams', teamId, 'activity'] });
     },
   });
+}
+
+/**
+ * The team's settings as they are now when a save was refused because another owner saved
+ * first (409 `version_conflict` with `current`), or null for any other failure.
+ */
+export function conflictingSettings(error: unknown): TeamSettings | null {
+  if (errorStatus(error) !== 409 || errorCode(error) !== 'version_conflict' || !isAxiosError(error)) return null;
+  const current: unknown = (error.response?.data as { current?: unknown } | undefined)?.current;
+  if (typeof current !== 'object' || current === null) return null;
+  const c = current as { version?: unknown; settings?: unknown };
+  return typeof c.version === 'number' && typeof c.settings === 'object' && c.settings !== null ? (current as TeamSettings) : null;
 }

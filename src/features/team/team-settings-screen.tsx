@@ -45,7 +45,7 @@ export function TeamSettingsScreen() {
       </View>
       {query.isPending ? <LoadingState label="Loading the team settings" /> : null}
       {query.isError ? <ErrorState message="The team settings could not be loaded." onRetry={() => void query.refetch()} /> : null}
-      {query.data && isOwner ? <TeamSettingsForm key={team.teamId} teamId={team.teamId} settings={query.data.settings} /> : null}
+      {query.data && isOwner ? <TeamSettingsForm key={team.teamId} teamId={team.teamId} settings={query.data.settings} version={query.data.version} /> : null}
       {query.data && !isOwner ? (
         <>
           <InlineAlert tone="info" message="Only owners change the team settings; you see them read-only." />

@@ -1,5 +1,5 @@
 import { useFormik, type FormikProps } from 'formik';
-import { Children, useState } from 'react';
+import { Children, useRef, useState } from 'react';
 import { StyleSheet, View } from 'react-native';
 
 import { errorMessage, fieldErrors } from '@/api';
@@ -10,8 +10,10 @@ import { TOUCH_CONTACTS, TOUCH_MATERIALS, touchLimitC } from '@/core/reliability
 import { ChoiceRow } from '@/features/study-editor/components/choice-row';
 import { unitOf } from '@/features/study-editor/quantity-text';
 
-import { useSaveTeamSettings } from '../api';
-import { CONTACT_LABELS, MATERIAL_LABELS } from '../team-settings-lines';
+import { conflictingSettings, useSaveTeamSettings } from '../api';
+import { CONTACT_LABELS, defaultLines, MATERIAL_LABELS } from '../team-settings-lines';
+import type { TeamSettings } from '../types';
+import { DefaultsList } from './defaults-list';
 import { formValuesFrom, QUANTITY_FIELDS, readFormValues, validateFormValues, type QuantityKey, type TeamSettingsFormValues } from '../team-settings-values';
 
 type Form = FormikProps<TeamSettingsFormValues>;
@@ -80,24 +82,36 @@ function Section({ title, note, children }: { title: string; note?: string; chil
   );
 }
 
-export type TeamSettingsFormProps = { teamId: number; settings: StudyDefaults };
+/** `version`: the version of `settings`, which a save is made on top of. */
+export type TeamSettingsFormProps = { teamId: number; settings: StudyDefaults; version: number };
 
 /** The owner's form over the team's defaults; values are checked with the study's own parsers. */
-export function TeamSettingsForm({ teamId, settings }: TeamSettingsFormProps) {
+export function TeamSettingsForm({ teamId, settings, version }: TeamSettingsFormProps) {
   const save = useSaveTeamSettings(teamId);
   const [serverError, setServerError] = useState<string | null>(null);
   const [saved, setSaved] = useState(false);
+  /** The version the form's changes are made on; moves on with each save and with "keep mine". */
+  const base = useRef(version);
+  /** Another owner's save that came first: the form keeps what was typed until the owner chooses. */
+  const [conflict, setConflict] = useState<TeamSettings | null>(null);
   const form = useFormik<TeamSettingsFormValues>({
     initialValues: formValuesFrom(settings),
     validate: validateFormValues,
     onSubmit: async (values, helpers) => {
       setServerError(null);
       setSaved(false);
+      setConflict(null);
       try {
-        const next = await save.mutateAsync(readFormValues(values).settings);
+        const next = await save.mutateAsync({ settings: readFormValues(values).settings, baseVersion: base.current });
+        base.current = next.version;
         helpers.resetForm({ values: formValuesFrom(next.settings) });
         setSaved(true);
       } catch (error) {
+        const current = conflictingSettings(error);
+        if (current) {
+          setConflict(current);
+          return;
+        }
         helpers.setErrors(fieldErrors(error));
         setServerError(errorMessage(error));
       }
@@ -181,6 +195,35 @@ export function TeamSettingsForm({ teamId, settings }: TeamSettingsFormProps) {
       </Section>
 
       {serverError ? <InlineAlert message={serverError} /> : null}
+      {conflict ? (
+        <Card>
+          <View style={styles.conflict} testID="team-settings-conflict">
+            <InlineAlert
+              message={`${conflict.updatedBy ? conflict.updatedBy.name : 'Another owner'} saved the team settings first (now version ${conflict.version}). Your changes are still in the form, not saved.`}
+            />
+            <DefaultsList lines={defaultLines(conflict.settings)} testID="team-settings-theirs" />
+            <View style={styles.actions}>
+              <Button
+                label="Save mine over theirs"
+                onPress={() => {
+                  base.current = conflict.version;
+                  setConflict(null);
+                  form.handleSubmit();
+                }}
+              />
+              <Button
+                label="Take their values"
+                variant="secondary"
+                onPress={() => {
+                  base.current = conflict.version;
+                  form.resetForm({ values: formValuesFrom(conflict.settings) });
+                  setConflict(null);
+                }}
+              />
+            </View>
+          </View>
+        </Card>
+      ) : null}
       {saved && !form.dirty ? <InlineAlert tone="info" message="Saved. Studies started from now on take these defaults; existing studies keep their values." /> : null}
       <View style={styles.actions}>
         <Button label="Save team settings" onPress={() => form.handleSubmit()} busy={form.isSubmitting} disabled={!form.dirty && !form.isSubmitting} />
@@ -199,4 +242,5 @@ const styles = StyleSheet.create({
   quantity: { maxWidth: 520 },
   source: { maxWidth: 520 },
   actions: { flexDirection: 'row', flexWrap: 'wrap', gap: spacing.sm },
+  conflict: { gap: spacing.md },
 });
