@@ -102,6 +102,39 @@ describe('GET /api/studies/:id/ranking', () => {
     for (const c of all) expect(Number.isFinite(c.devices[0].peakC)).toBe(true);
   });
 
+  it('ranks the on-board demo, whose copper pour leads to the enclosure air: the steady answer counts the air’s rise', async () => {
+    const onboard = JSON.parse(fs.readFileSync(path.join(__dirname, '../../examples/onboard-24v-to-5v.json'), 'utf8'));
+    const created = await agent.post('/api/studies').send({ title: 'On-board regulator', document: onboard });
+    expect(created.status).toBe(201);
+    const res = await agent.get(`/api/studies/${created.body.study.id}/ranking?sink=PCB&airSpeed=2`);
+    expect(res.status).toBe(200);
+    const { result, notes } = res.body;
+    // The enclosure's 3.5 K/W at 1,800 m, derated as laminar natural convection, h ∝ ρ^(1/2)
+    // (U.S. Standard Atmosphere 1976, p/p0 ≈ 0.8043), as the study's own site adjustment does.
+    const ratio = Math.pow(1 - (0.0065 * 1799.49) / 288.15, 5.2559);
+    const renc = 3.5 / Math.sqrt(ratio);
+    expect(result.enclosure.rthKPerW).toBeCloseTo(renc, 3);
+    expect(result.enclosure.capacityJPerK).toBe(90);
+    expect(notes.join(' ')).toContain('enclosure air');
+    // Heaviest segment, one regulator: P = (Vin − Vout)·I + Vin·Iq = 19 V × 0.8 A + 24 V × 5 mA
+    // = 15.32 W (PHYSICS.md §1). In steady state it all crosses the wall: 15.32 × 3.903 = 59.8 K,
+    // and junction to pour 15.32 × (0.35 + 1.1 + 1.55 + 1.2) = 64.3 K: together more than the
+    // 90 K from 40 °C to the 130 °C target, so the steady answer finds no sink.
+    expect(result.required.feasible).toBe(false);
+    expect(result.required.enclosureRiseK).toBeCloseTo(15.32 * renc, 2);
+    expect(result.required.reason).toContain('the enclosure air rises 59.79 K above the ambient');
+    // The fan sink at 2 m/s, 0.3 K/W × 1/sqrt(p/p0) at the site: its steady margin is the series
+    // sum 130 − [40 + 15.32 × (4.2 + Rsa + Renc)] (thermal resistances in series, common practice).
+    const all = [...result.passing, ...result.failing];
+    const fan = all.find((c: { name: string }) => c.name === 'Fan sink');
+    expect(fan.rsaKPerW).toBeCloseTo(0.3 / Math.sqrt(ratio), 3);
+    expect(fan.steady.marginK).toBeCloseTo(130 - (40 + 15.32 * (4.2 + 0.3 / Math.sqrt(ratio) + renc)), 2);
+    // The 1,100 s profile from cold leaves the housing (τ ≈ 90 J/K × 3.9 K/W = 350 s) well short
+    // of that: the simulated peak of the fan sink lies far below its steady value.
+    expect(fan.devices[0].peakC).toBeLessThan(130 - fan.steady.marginK - 20);
+    for (const c of all) expect(Number.isFinite(c.devices[0].peakC)).toBe(true);
+  });
+
   it('answers 400 for a bad sort key or number, and 404 to other teams', async () => {
     expect((await agent.get(`/api/studies/${studyId}/ranking?sort=colour`)).status).toBe(400);
     expect((await agent.get(`/api/studies/${studyId}/ranking?ambientC=warm`)).body.error.details[0].path).toBe('ambientC');
