@@ -1,3 +1,4 @@
+import { memo } from 'react';
 import { StyleSheet, View } from 'react-native';
 
 import { Button, Text } from '@/components/ui';
@@ -10,8 +11,12 @@ import { DeviceCard } from './device-card';
 
 export type DevicesSectionProps = { document: RawDocument; teamId: number };
 
+/** It reads only the devices and the sinks of the document: an edit elsewhere (the ambient, a long profile) leaves it as drawn. */
+const sameDevicesAndSinks = (a: DevicesSectionProps, b: DevicesSectionProps) =>
+  a.teamId === b.teamId && a.document.devices === b.document.devices && a.document.sinks === b.document.sinks;
+
 /** The pass devices of the study, each a card; new ones start empty and mounted on the first sink. */
-export function DevicesSection({ document, teamId }: DevicesSectionProps) {
+export const DevicesSection = memo(function DevicesSection({ document, teamId }: DevicesSectionProps) {
   const { update } = useEditorActions();
   const listError = useFieldError('document.devices');
   const devices = document.devices ?? [];
@@ -40,7 +45,7 @@ export function DevicesSection({ document, teamId }: DevicesSectionProps) {
       />
     </View>
   );
-}
+}, sameDevicesAndSinks);
 
 const styles = StyleSheet.create({
   box: { gap: spacing.md },

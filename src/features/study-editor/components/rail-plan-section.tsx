@@ -38,8 +38,9 @@ export type RailPlanSectionProps = { plan: RawRailPlan | undefined; deviceIds: s
  * ballasts, the thresholds between taps with their hysteresis, the relay and the map range
  * (docs/study-format.md, `railPlan`). With a plan, electrical segments give Vout and Iload
  * only: the input comes from the tap the plan selects.
+ * Drawn again only when the plan or the device ids change.
  */
-export function RailPlanSection({ plan, deviceIds }: RailPlanSectionProps) {
+export const RailPlanSection = memo(function RailPlanSection({ plan, deviceIds }: RailPlanSectionProps) {
   const { set, update } = useEditorActions();
   const planError = useFieldError(FIELD);
   const deviceError = useFieldError(at(FIELD, 'device'));
@@ -174,7 +175,7 @@ export function RailPlanSection({ plan, deviceIds }: RailPlanSectionProps) {
       <Button label="Remove rail plan" variant="ghost" onPress={() => set(FIELD, undefined)} style={styles.button} />
     </View>
   );
-}
+});
 
 type CircuitNodeProps = { field: string; node: RawCircuit; owner: string; sourceIds: string[]; depth: number };
 

@@ -1,3 +1,4 @@
+import { memo } from 'react';
 import { StyleSheet, View } from 'react-native';
 
 import { Text } from '@/components/ui';
@@ -30,8 +31,12 @@ const obj = (v: unknown): RawObject | undefined => (v && typeof v === 'object' &
 
 export type SiteLifeSectionProps = { document: RawDocument };
 
+/** It reads only the site, the lifetime, the touch limit and whether the profile is periodic: an edit elsewhere leaves it as drawn. */
+const sameSiteLifeTouch = ({ document: a }: SiteLifeSectionProps, { document: b }: SiteLifeSectionProps) =>
+  a.site === b.site && a.lifetime === b.lifetime && a.touch === b.touch && a.profile?.periodic === b.profile?.periodic;
+
 /** Site altitude, the mission for the life estimate and the touch-temperature limit (docs/study-format.md). */
-export function SiteLifeSection({ document: doc }: SiteLifeSectionProps) {
+export const SiteLifeSection = memo(function SiteLifeSection({ document: doc }: SiteLifeSectionProps) {
   const { set } = useEditorActions();
   const site = obj(doc.site);
   const lifetime = obj(doc.lifetime);
@@ -136,7 +141,7 @@ export function SiteLifeSection({ document: doc }: SiteLifeSectionProps) {
       ))}
     </View>
   );
-}
+}, sameSiteLifeTouch);
 
 const styles = StyleSheet.create({
   box: { gap: spacing.md },

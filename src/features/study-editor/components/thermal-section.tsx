@@ -1,3 +1,4 @@
+import { memo } from 'react';
 import { StyleSheet, View } from 'react-native';
 
 import { Button, Text } from '@/components/ui';
@@ -11,8 +12,12 @@ import { SinkCard } from './sink-card';
 
 export type ThermalSectionProps = { document: RawDocument; teamId: number };
 
+/** It reads only the sinks and the enclosure of the document: an edit elsewhere leaves it as drawn. */
+const sameSinksAndEnclosure = (a: ThermalSectionProps, b: ThermalSectionProps) =>
+  a.teamId === b.teamId && a.document.sinks === b.document.sinks && a.document.enclosure === b.document.enclosure;
+
 /** Sinks (each device sits on one), and the optional enclosure air between them and the room. */
-export function ThermalSection({ document, teamId }: ThermalSectionProps) {
+export const ThermalSection = memo(function ThermalSection({ document, teamId }: ThermalSectionProps) {
   const { set, update } = useEditorActions();
   const listError = useFieldError('document.sinks');
   const sinks = document.sinks ?? [];
@@ -58,7 +63,7 @@ export function ThermalSection({ document, teamId }: ThermalSectionProps) {
       </View>
     </View>
   );
-}
+}, sameSinksAndEnclosure);
 
 const styles = StyleSheet.create({
   box: { gap: spacing.md },
