@@ -160,4 +160,13 @@ describe('heatsink ranking panel', () => {
     // laminar natural convection h ∝ ρ^(1/2), so Rθsa × 1/sqrt(0.804) ≈ 1.12 (PHYSICS.md §5).
     expect(screen.getByTestId('ranking-site')).toHaveTextContent(/^Ranked at 1800\sm: Rθsa × 1\.12 \(air pressure 0\.804 of sea level\)\.$/);
   });
+
+  it('ranks a sink inside an enclosure with the air’s rise counted in the steady answer', async () => {
+    showStudy({ ...DOCUMENT, enclosure: { rthKPerW: 1, capacityJPerK: 500 } } as typeof DOCUMENT);
+    await screen.findByTestId('ranking-answer', undefined, { timeout: 15000 });
+    expect(screen.getByTestId('ranking-enclosure')).toHaveTextContent(/^The sink sheds into the enclosure air, simulated with it: 1\sK\/W to the room, 500\sJ\/K of air and walls\.$/);
+    // Series thermal resistances (Incropera & DeWitt §3.1): all 20 W cross the enclosure wall,
+    // 20 × 1 = 20 K, so Rsa ≤ (130 − 25 − 20)/20 − 1.5 = 2.75 K/W.
+    expect(screen.getByTestId('ranking-answer')).toHaveTextContent(/needs Rθsa ≤ 2\.75\sK\/W, set by Q1, with the enclosure air 20\sK above the ambient\./);
+  });
 });

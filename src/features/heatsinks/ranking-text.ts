@@ -57,7 +57,10 @@ export function steadySentence(result: RankingJson): string {
   let need: string;
   if (!r.feasible) need = `The steady answer finds no sink that can do it${r.reason ? `: ${r.reason}` : ''}.`;
   else if (r.rsaKPerW === null) need = 'The steady answer needs no sink: nothing is dissipated.';
-  else need = `The steady answer (every segment’s power held forever) needs Rθsa ≤ ${formatQuantity(r.rsaKPerW, 'K/W')}${r.limitingDevice ? `, set by ${r.limitingDevice}` : ''}.`;
+  else {
+    const air = r.enclosureRiseK ? `, with the enclosure air ${formatQuantity(r.enclosureRiseK, 'K')} above the ambient` : '';
+    need = `The steady answer (every segment’s power held forever) needs Rθsa ≤ ${formatQuantity(r.rsaKPerW, 'K/W')}${r.limitingDevice ? `, set by ${r.limitingDevice}` : ''}${air}.`;
+  }
   const c = result.steadyChoice;
   if (!c) return `${need} No catalogue sink meets it.`;
   return `${need} The smallest catalogue sink that meets it is ${nameOf(c)}, ${sortValueText(result.scenario.sortBy, c.sortValue)}.`;
@@ -77,4 +80,12 @@ export function siteSentence(result: RankingJson): string | null {
   if (!site) return null;
   const radiation = site.radiationShare > 0 ? `, ${Math.round(site.radiationShare * 100)} % of each rating taken as radiation` : '';
   return `Ranked at ${formatQuantity(site.altitudeM, 'm')}: Rθsa × ${site.rsaFactor.toFixed(2)} (air pressure ${formatNumber(site.pressureRatio)} of sea level${radiation}).`;
+}
+
+/** "The sink sheds into the enclosure air: 3.9 K/W to the room, 90 J/K." or null when it leads straight to the ambient. */
+export function enclosureSentence(result: RankingJson): string | null {
+  const e = result.enclosure;
+  if (!e) return null;
+  const capacity = e.capacityJPerK > 0 ? `, ${formatQuantity(e.capacityJPerK, 'J/K')} of air and walls` : ', no heat capacity given';
+  return `The sink sheds into the enclosure air, simulated with it: ${formatQuantity(e.rthKPerW, 'K/W')} to the room${capacity}.`;
 }

@@ -8,7 +8,7 @@ import { formatQuantity } from '@/features/studies/quantity-format';
 
 import { useSinkRanking } from '../api';
 import { checkRankingForm, initialRankingForm, rankingDefaults } from '../ranking-form';
-import { siteSentence, smallestSentence, steadySentence, thermalMassSentence } from '../ranking-text';
+import { enclosureSentence, siteSentence, smallestSentence, steadySentence, thermalMassSentence } from '../ranking-text';
 import type { RankingResponse } from '../ranking-types';
 import { useDebouncedValue } from '../use-debounced-value';
 import { RankingControls } from './ranking-controls';
@@ -25,6 +25,7 @@ function Answer({ data }: { data: RankingResponse }) {
   const r = data.result;
   const gain = thermalMassSentence(r);
   const site = siteSentence(r);
+  const enclosure = enclosureSentence(r);
   const notes = [...data.notes, ...r.assumptions];
   const s = r.scenario;
   return (
@@ -35,6 +36,11 @@ function Answer({ data }: { data: RankingResponse }) {
       {site ? (
         <Text variant="caption" tone="muted" testID="ranking-site">
           {site}
+        </Text>
+      ) : null}
+      {enclosure ? (
+        <Text variant="caption" tone="muted" testID="ranking-enclosure">
+          {enclosure}
         </Text>
       ) : null}
       <View testID="ranking-answer" style={[styles.box, r.smallest ? styles.pass : styles.fail]}>
