@@ -1,6 +1,6 @@
 /** The study document (format "junctura-study" v1) and the pipeline that evaluates it. */
 export * from './types';
-export { parseStudy } from './parse-study';
+export { createParseCache, parseStudy, type ParseCache } from './parse-study';
 export { parsePackage } from './parse-package';
 export { parseElectrical } from './parse-electrical';
 export { parseSoa } from './parse-soa';

@@ -1,4 +1,4 @@
-import { STUDY_FORMAT, STUDY_VERSION, type Device, type Sink, type StudyDocument } from './types';
+import { STUDY_FORMAT, STUDY_VERSION, type Device, type Profile, type Sink, type StudyDocument } from './types';
 import {
   asArray,
   asObject,
@@ -59,6 +59,12 @@ function checkSinkPaths(sinks: Sink[], hasEnclosure: boolean): void {
   });
 }
 
+function withoutProfile(root: Record<string, unknown>): Record<string, unknown> {
+  const rest = { ...root };
+  delete rest.profile;
+  return rest;
+}
+
 function checkDeviceSinks(devices: Device[], sinks: Sink[]): void {
   const ids = new Set(sinks.map((s) => s.id));
   devices.forEach((device, i) => {
@@ -69,20 +75,35 @@ function checkDeviceSinks(devices: Device[], sinks: Sink[]): void {
 }
 
 /**
+ * Parsed profiles kept by their raw profile object, for a caller that parses one document
+ * again and again as it is edited (the live solver) and hands back the same raw profile object
+ * while the profile is unchanged. A raw document given to parseStudy with a cache must not be
+ * changed in place afterwards, and a parsed document must not be changed: the profile is shared.
+ */
+export type ParseCache = { profiles: WeakMap<object, { context: string; profile: Profile }> };
+
+export const createParseCache = (): ParseCache => ({ profiles: new WeakMap() });
+
+/**
  * Checks a study document (format "junctura-study", version 1) and returns it with defaults
  * filled in and profile groups expanded. Throws a TypeError (wrong type, missing or unknown
  * field) or RangeError (value out of range, broken reference) whose message starts with the
  * field's path, e.g. `devices[1].package.terms[0].tauS: must be greater than zero, got -1 s`.
+ * With a cache, a raw profile object met before with the same raw devices and rail-plan
+ * presence (all its parse depends on) is not read again.
  */
-export function parseStudy(json: unknown): StudyDocument {
+export function parseStudy(json: unknown, cache?: ParseCache): StudyDocument {
   const root = asObject(json, '');
+  const rawProfile = root.profile;
+  const known = cache && rawProfile !== null && typeof rawProfile === 'object' ? cache.profiles.get(rawProfile) : undefined;
   const format = readString(root, 'format', '');
   if (format !== STUDY_FORMAT) rangeFail('format', `must be "${STUDY_FORMAT}", got ${JSON.stringify(format)}`);
   if (root.version === undefined) typeFail('version', 'is required');
   if (root.version !== STUDY_VERSION) {
     rangeFail('version', `must be ${STUDY_VERSION} (the only version this program reads), got ${JSON.stringify(root.version)}`);
   }
-  const nonFinite = findNonFinite(root);
+  // A known profile was finite when it was parsed (and is not changed in place).
+  const nonFinite = findNonFinite(known ? withoutProfile(root) : root);
   if (nonFinite !== undefined) rangeFail(nonFinite, 'must be a finite number, got NaN or Infinity');
   onlyKeys(root, TOP_KEYS, '');
 
@@ -104,7 +125,13 @@ export function parseStudy(json: unknown): StudyDocument {
   checkDeviceSinks(devices, sinks);
 
   const railPlan = root.railPlan === undefined ? undefined : parseRailPlan(root.railPlan, 'railPlan', devices);
-  const profile = parseProfile(root.profile, 'profile', devices, railPlan !== undefined);
+  const context = cache ? JSON.stringify([root.devices, railPlan !== undefined]) : '';
+  let profile: Profile;
+  if (known && known.context === context) profile = known.profile;
+  else {
+    profile = parseProfile(root.profile, 'profile', devices, railPlan !== undefined);
+    if (cache && rawProfile !== null && typeof rawProfile === 'object') cache.profiles.set(rawProfile, { context, profile });
+  }
   const doc: StudyDocument = { format: STUDY_FORMAT, version: STUDY_VERSION, title, description, marginK, ambient, sinks, devices, profile };
   if (mainsFed !== undefined) doc.mainsFed = mainsFed;
   if (enclosure) doc.enclosure = enclosure;

@@ -1,4 +1,4 @@
-import { parseStudy, type StudyDocument } from '@/core/study';
+import { createParseCache, parseStudy, type StudyDocument } from '@/core/study';
 
 import { inDocument } from './field-path';
 
@@ -18,10 +18,17 @@ export function splitParserMessage(message: string): Problem {
   return { field: inDocument(path === 'study' ? '' : path), reason: message.slice(cut + 2) };
 }
 
+/**
+ * Parsed profiles of the documents checked so far: the form's values change by copies along
+ * the edited path (formik's setIn), so an edit elsewhere leaves the profile object as it was
+ * and a long logged profile is not read again on every keystroke.
+ */
+const parsed = createParseCache();
+
 /** Runs the study parser (the one the server and the command line use) on the edited document. */
 export function checkDocument(document: unknown): DocumentCheck {
   try {
-    return { ok: true, document: parseStudy(document) };
+    return { ok: true, document: parseStudy(document, parsed) };
   } catch (error) {
     if (error instanceof TypeError || error instanceof RangeError) return { ok: false, problem: splitParserMessage(error.message) };
     throw error;

@@ -1,0 +1,56 @@
+import { createParseCache, parseStudy } from '@/core/study';
+import { twoDeviceStudy } from './study-fixtures';
+
+type Doc = Record<string, any>;
+
+const study = (): Doc => {
+  const doc = twoDeviceStudy();
+  doc.profile.segments = Array.from({ length: 50 }, (_, i) => ({ durationS: 0.5 + (i % 3), powerW: { Q1: 10 + i, Q2: 3 } }));
+  return doc;
+};
+
+const thrown = (f: () => unknown): string => {
+  try {
+    f();
+  } catch (e) {
+    return (e as Error).message;
+  }
+  return 'nothing thrown';
+};
+
+// Reference: the parser without a cache; a cached parse must give the same document or the same error.
+describe('parseStudy with a parse cache', () => {
+  it('reuses the parsed profile of the same raw profile object and matches the uncached parse', () => {
+    const cache = createParseCache();
+    const raw = study();
+    const first = parseStudy(raw, cache);
+    const edited = { ...raw, ambient: { temperatureC: 55 } };
+    const second = parseStudy(edited, cache);
+    expect(second.profile).toBe(first.profile);
+    expect(second).toEqual(parseStudy(edited));
+    // A new profile object is parsed again.
+    const changed = { ...raw, profile: { ...raw.profile, segments: raw.profile.segments.slice(0, 10) } };
+    const third = parseStudy(changed, cache);
+    expect(third.profile).not.toBe(first.profile);
+    expect(third).toEqual(parseStudy(changed));
+  });
+
+  it('parses the profile again when the devices it refers to change', () => {
+    const cache = createParseCache();
+    const raw = study();
+    parseStudy(raw, cache);
+    const renamed = { ...raw, devices: raw.devices.map((d: Doc) => (d.id === 'Q2' ? { ...d, id: 'Q9' } : d)) };
+    const message = thrown(() => parseStudy(renamed, cache));
+    expect(message).toBe(thrown(() => parseStudy(renamed)));
+    expect(message).toMatch(/^profile\.segments\[0\]\.powerW\.Q2: no device has the id "Q2"/);
+  });
+
+  it('still finds a non-finite value outside a known profile', () => {
+    const cache = createParseCache();
+    const raw = study();
+    parseStudy(raw, cache);
+    const bad = { ...raw, ambient: { temperatureC: Number.NaN } };
+    expect(thrown(() => parseStudy(bad, cache))).toBe(thrown(() => parseStudy(bad)));
+    expect(thrown(() => parseStudy(bad, cache))).toMatch(/^ambient\.temperatureC: must be a finite number/);
+  });
+});
