@@ -47,6 +47,8 @@ export function createStepper(sm: StudyModel, observer: Observer | null, events:
   const shutdown = doc.devices.flatMap((d, i) => (d.electrical?.thermalShutdown ? [i] : []));
   /** Fed devices by segment index (an array: a long profile would fill a map one entry per segment). */
   const fedCache: number[][] = [];
+  /** Power by segment index while every device is on. */
+  const powerCache: SegmentPower[] = [];
   const powerFor = createSegmentPowerCache(doc);
   let power: SegmentPower | null = null;
   let powerSegment = -1;
@@ -77,7 +79,12 @@ export function createStepper(sm: StudyModel, observer: Observer | null, events:
     const segment = doc.profile.segments[segmentIndex];
     let fed = fedCache[segmentIndex];
     if (!fed) fedCache[segmentIndex] = fed = fedDevices(doc, segment);
-    power = powerFor(segment, fed, on);
+    // With every device on, a segment's power is the same each time it is met (passes, pieces).
+    let allOn = true;
+    for (let i = 0; i < m; i++) allOn &&= on[i];
+    if (allOn) {
+      power = powerCache[segmentIndex] ??= powerFor(segment, fed, on);
+    } else power = powerFor(segment, fed, on);
     powerSegment = segmentIndex;
     for (let i = 0; i < m; i++) powerOn[i] = on[i];
     for (let d = 0; d < m; d++) u[d] = power.partPowerW[d] * doc.devices[d].count;
