@@ -6,6 +6,7 @@ import { apiStudies, baseUrl, screenshot, signIn } from './support/app';
 import { DESKTOP, openBrowser, PHONE, type BrowserSession, type Viewport } from './support/browser';
 
 const LAB_SUPPLY = /laboratory supply/i;
+const ONBOARD = /on-board 24 V to 5 V/i;
 
 type RankedSink = { id: string; name: string };
 type ApiHeatsink = { id: number; name: string; rthKPerW: number; referenceRiseK: number; forcedAir: { airSpeedMPerS: number; rthKPerW: number }[]; notes: string };
@@ -70,6 +71,24 @@ describe('rail plan, SOA and heatsink ranking in the browser', () => {
     await page.getByRole('heading', { name: byPrice.result.smallest!.name, exact: true }).waitFor();
   });
 
+  it('ranks the on-board demo, whose copper pour sheds into the enclosure air, to the server’s smallest passing sink', async () => {
+    const { page } = browser;
+    const study = (await apiStudies(page)).find((s) => ONBOARD.test(s.title));
+    if (!study) throw new Error('the seeded on-board demo study is missing');
+    // The server is the reference: its own ranking of the demo catalogue in the pour's slot.
+    const reference = await apiGet<{ result: { smallest: RankedSink | null; enclosure?: { rthKPerW: number } } }>(page, `/studies/${study.id}/ranking?sink=PCB&sort=mass&airSpeed=0`);
+    expect(reference.result.enclosure).toBeDefined();
+    await page.goto(`${baseUrl()}/studies/${study.id}`);
+    await page.getByTestId('ranking-answer').waitFor({ timeout: 60_000 });
+    expect(await page.getByTestId('ranking-enclosure').innerText()).toMatch(/^The sink sheds into the enclosure air, simulated with it: 3\.9\sK\/W to the room, 90\sJ\/K of air and walls\. Each sink’s mean rise is its rise above that air\.$/);
+    const smallest = reference.result.smallest;
+    if (smallest) {
+      expect(await page.getByTestId(`ranked-${smallest.id}`).getByText('Smallest passing').count()).toBe(1);
+    } else {
+      expect(await page.getByTestId('ranking-answer').innerText()).toMatch(/^No (sink|candidate)/);
+    }
+  });
+
   it('designs a custom extrusion and saves it to the catalogue', async () => {
     const { page } = browser;
     await page.goto(`${baseUrl()}/heatsinks`);
@@ -126,6 +145,13 @@ describe.each([
     await page.getByTestId('ranking-answer').waitFor({ timeout: 60_000 });
     await scrollToTop(page.getByTestId('ranking-panel'));
     await screenshot(page, viewport, 'ranking-panel');
+
+    // The on-board demo: a copper pour that sheds into the air of a closed housing.
+    const onboard = (await apiStudies(page)).find((s) => ONBOARD.test(s.title));
+    await page.goto(`${baseUrl()}/studies/${onboard!.id}`);
+    await page.getByTestId('ranking-answer').waitFor({ timeout: 60_000 });
+    await scrollToTop(page.getByTestId('ranking-panel'));
+    await screenshot(page, viewport, 'ranking-panel-enclosure');
 
     await page.goto(`${baseUrl()}/heatsinks/design`);
     await page.getByTestId('plate-fin-estimate').waitFor();

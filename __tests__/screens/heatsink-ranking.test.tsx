@@ -164,7 +164,7 @@ describe('heatsink ranking panel', () => {
   it('ranks a sink inside an enclosure with the air’s rise counted in the steady answer', async () => {
     showStudy({ ...DOCUMENT, enclosure: { rthKPerW: 1, capacityJPerK: 500 } } as typeof DOCUMENT);
     await screen.findByTestId('ranking-answer', undefined, { timeout: 15000 });
-    expect(screen.getByTestId('ranking-enclosure')).toHaveTextContent(/^The sink sheds into the enclosure air, simulated with it: 1\sK\/W to the room, 500\sJ\/K of air and walls\.$/);
+    expect(screen.getByTestId('ranking-enclosure')).toHaveTextContent(/^The sink sheds into the enclosure air, simulated with it: 1\sK\/W to the room, 500\sJ\/K of air and walls\. Each sink’s mean rise is its rise above that air\.$/);
     // Series thermal resistances (Incropera & DeWitt §3.1): all 20 W cross the enclosure wall,
     // 20 × 1 = 20 K, so Rsa ≤ (130 − 25 − 20)/20 − 1.5 = 2.75 K/W.
     expect(screen.getByTestId('ranking-answer')).toHaveTextContent(/needs Rθsa ≤ 2\.75\sK\/W, set by Q1, with the enclosure air 20\sK above the ambient\./);

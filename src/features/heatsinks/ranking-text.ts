@@ -82,10 +82,10 @@ export function siteSentence(result: RankingJson): string | null {
   return `Ranked at ${formatQuantity(site.altitudeM, 'm')}: Rθsa × ${site.rsaFactor.toFixed(2)} (air pressure ${formatNumber(site.pressureRatio)} of sea level${radiation}).`;
 }
 
-/** "The sink sheds into the enclosure air: 3.9 K/W to the room, 90 J/K." or null when it leads straight to the ambient. */
+/** "The sink sheds into the enclosure air, simulated with it: 3.9 K/W to the room, …" or null when it leads straight to the ambient. */
 export function enclosureSentence(result: RankingJson): string | null {
   const e = result.enclosure;
   if (!e) return null;
   const capacity = e.capacityJPerK > 0 ? `, ${formatQuantity(e.capacityJPerK, 'J/K')} of air and walls` : ', no heat capacity given';
-  return `The sink sheds into the enclosure air, simulated with it: ${formatQuantity(e.rthKPerW, 'K/W')} to the room${capacity}.`;
+  return `The sink sheds into the enclosure air, simulated with it: ${formatQuantity(e.rthKPerW, 'K/W')} to the room${capacity}. Each sink’s mean rise is its rise above that air.`;
 }
