@@ -11,9 +11,10 @@ export type WorkerLike = {
 
 /**
  * What ending a busy worker costs beyond waiting for it, ms: a fresh worker loads the solver
- * and runs its first solve without compiled code. Measured in Chromium on the 10,000-segment
- * live-edit study (`npm run bench`'s case): 50–140 ms to start and 60–100 ms more for the first
- * solve than for the next ones. A solve expected to end sooner than this is left to finish.
+ * and runs its first solve without compiled code. Measured in headless Chromium on the
+ * 10,000-segment live-edit study (`npm run bench`'s case, a shared 2-core machine): 55–140 ms to
+ * start and 45–115 ms more for the first solve than for the next ones (a spare started ahead
+ * saves the start only). A solve expected to end sooner than this is left to finish.
  */
 export const RESTART_COST_MS = 150;
 
