@@ -38,11 +38,10 @@ export function runSegmentsInBlocks(
   const B = PROFILE_BLOCK_SIZE;
   const small = SMALL_EXP_ARG;
   const tol = PEAK_SEARCH_ABS_TOL;
-  // Per mode and segment of the block: decay e, d = x − x∞ at the start and at the end, |d − d_end|.
+  // Per mode and segment of the block: decay e, d = x − x∞ at the start and at the end.
   const decay = new Float64Array(n * B);
   const dev = new Float64Array(n * B);
   const devEnd = new Float64Array(n * B);
-  const moved = new Float64Array(n * B);
   const steady = new Float64Array(B);
   const start = new Float64Array(B);
   const end = new Float64Array(B);
@@ -91,13 +90,11 @@ export function runSegmentsInBlocks(
           const de = d * e;
           decay[kb + i] = e;
           devEnd[kb + i] = de;
-          moved[kb + i] = Math.abs(d - de);
           xk = xi + de;
         } else {
           // Zero-length segments take no time: the state stays as it is.
           decay[kb + i] = 1;
           devEnd[kb + i] = d;
-          moved[kb + i] = 0;
         }
       }
       x[k] = xk;
@@ -109,7 +106,7 @@ export function runSegmentsInBlocks(
       for (let i = 0; i < m; i++) end[i] = steady[i];
       excess.fill(0, 0, m);
       // Four modes per pass over the block, so end and excess are loaded and stored a
-      // quarter as often; |d − d_end| was stored per mode in the mode loop.
+      // quarter as often; |d − d_end| from the two stored deviations.
       let k = 0;
       for (; k + 4 <= n; k += 4) {
         const w0 = watchRows[base + k];
@@ -125,8 +122,12 @@ export function runSegmentsInBlocks(
         const b2 = b1 + B;
         const b3 = b2 + B;
         for (let i = 0; i < m; i++) {
-          end[i] += w0 * devEnd[b0 + i] + w1 * devEnd[b1 + i] + w2 * devEnd[b2 + i] + w3 * devEnd[b3 + i];
-          excess[i] += a0 * moved[b0 + i] + a1 * moved[b1 + i] + a2 * moved[b2 + i] + a3 * moved[b3 + i];
+          const e0 = devEnd[b0 + i];
+          const e1 = devEnd[b1 + i];
+          const e2 = devEnd[b2 + i];
+          const e3 = devEnd[b3 + i];
+          end[i] += w0 * e0 + w1 * e1 + w2 * e2 + w3 * e3;
+          excess[i] += a0 * Math.abs(dev[b0 + i] - e0) + a1 * Math.abs(dev[b1 + i] - e1) + a2 * Math.abs(dev[b2 + i] - e2) + a3 * Math.abs(dev[b3 + i] - e3);
         }
       }
       for (; k < n; k++) {
@@ -134,8 +135,9 @@ export function runSegmentsInBlocks(
         const wa = watchAbs[base + k];
         const kb = k * B;
         for (let i = 0; i < m; i++) {
-          end[i] += wk * devEnd[kb + i];
-          excess[i] += wa * moved[kb + i];
+          const e = devEnd[kb + i];
+          end[i] += wk * e;
+          excess[i] += wa * Math.abs(dev[kb + i] - e);
         }
       }
       let best = peakValue[w];
