@@ -73,12 +73,33 @@ export function runSegmentsInBlocks(
       const pb = kb - B;
       const rate = rates[k];
       const gapRate = k > 0 ? rate - rates[k - 1] : rate;
-      // x∞_k = Σ_j F_kj u_j over the block.
-      steadyOverBlock(columns, k, n, q, unrolled, u, inputs, s0, m, steady, fk);
+      // x∞_k = Σ_j F_kj u_j per segment: four multiply-adds inline from the transposed inputs
+      // (the same expression as steadyOverBlock), or the sum steadyOverBlock leaves in
+      // `steady` taken once (c0 = 1, the other terms 0).
+      let src = u;
+      let c0 = 1;
+      let c1 = 0;
+      let c2 = 0;
+      let c3 = 0;
+      let o1 = 0;
+      let o2 = 0;
+      let o3 = 0;
+      if (unrolled) {
+        c0 = q > 0 ? columns[k] : 0;
+        c1 = q > 1 ? columns[k + n] : 0;
+        c2 = q > 2 ? columns[k + 2 * n] : 0;
+        c3 = q > 3 ? columns[k + 3 * n] : 0;
+        o1 = B;
+        o2 = 2 * B;
+        o3 = 3 * B;
+      } else {
+        steadyOverBlock(columns, k, n, q, false, u, inputs, s0, m, steady, fk);
+        src = steady;
+      }
       let xk = x[k];
       for (let i = 0; i < m; i++) {
         const h = durations[s0 + i];
-        const xi = steady[i];
+        const xi = c0 * src[i] + c1 * src[o1 + i] + c2 * src[o2 + i] + c3 * src[o3 + i];
         const d = xk - xi;
         dev[kb + i] = d;
         if (h > 0) {
