@@ -147,3 +147,60 @@ describe('CSV export', () => {
     expect(preview.body.suggestedMapping.forcedAir).toEqual(expect.arrayContaining([{ column: 'rth_k_per_w_at_1_m_s', airSpeedMPerS: 1 }]));
   });
 });
+
+describe('convection exponent', () => {
+  it('stores n, shows null as the default, and refuses n outside 0…1 naming the field', async () => {
+    const set = await designer.post('/api/heatsinks').send({ name: 'Radiating plate', rthKPerW: 2.4, convectionExponent: 1 / 3 });
+    expect(set.status).toBe(201);
+    expect(set.body.item.convectionExponent).toBeCloseTo(1 / 3, 12);
+    const unset = await designer.post('/api/heatsinks').send({ name: 'Plain extrusion', rthKPerW: 2.4 });
+    expect(unset.body.item.convectionExponent).toBeNull();
+    const cleared = await designer.put(`/api/heatsinks/${set.body.item.id}`).send({ name: 'Radiating plate', rthKPerW: 2.4, convectionExponent: null });
+    expect(cleared.body.item.convectionExponent).toBeNull();
+
+    // The core's range for a natural-convection exponent is 0…1 (checkRange in candidate.ts).
+    for (const bad of [1.5, -0.1]) {
+      const res = await designer.post('/api/heatsinks').send({ name: 'Bad n', rthKPerW: 2, convectionExponent: bad });
+      expect(res.status).toBe(400);
+      expect(res.body.error.details).toEqual([{ path: 'convectionExponent', message: expect.stringContaining('0…1') }]);
+    }
+    const text = await designer.post('/api/heatsinks').send({ name: 'Bad n', rthKPerW: 2, convectionExponent: '0.3' });
+    expect(text.body.error.details[0].path).toBe('convectionExponent');
+  });
+
+  it('maps an "n" or "exponent" column, imports blank cells as the default, and names the row and field of a bad one', async () => {
+    const preview = await designer.post('/api/heatsinks/import/preview').attach('file', csv('Part,Rsa (K/W),n\nA,2,0.3\n'), 'n.csv');
+    expect(preview.body.suggestedMapping.convectionExponent).toEqual({ column: 'n' });
+    const alias = await designer.post('/api/heatsinks/import/preview').attach('file', csv('Part,Rsa (K/W),Exponent\nA,2,0.3\n'), 'e.csv');
+    expect(alias.body.suggestedMapping.convectionExponent).toEqual({ column: 'Exponent' });
+
+    const mapping = { name: { column: 'Part' }, rthKPerW: { column: 'Rsa (K/W)' }, convectionExponent: { column: 'n' } };
+    const before = await ctx.db.models.Heatsink.count();
+    const bad = await importCsv(designer, 'Part,Rsa (K/W),n\nN fine,2,0.3\nN too big,2,1.4\nN text,2,quarter\n', mapping);
+    expect(bad.status).toBe(400);
+    expect(bad.body.error.code).toBe('import_failed');
+    expect(bad.body.error.details).toEqual([
+      expect.objectContaining({ row: 3, column: 'n', message: expect.stringMatching(/^Convection exponent must lie in 0…1/) }),
+      expect.objectContaining({ row: 4, column: 'n', message: '"quarter" is not a number' }),
+    ]);
+    expect(await ctx.db.models.Heatsink.count()).toBe(before);
+
+    const good = await importCsv(designer, 'Part,Rsa (K/W),n\nN third,2,0.333\nN blank,2,\n', mapping);
+    expect(good.status).toBe(201);
+    expect((await ctx.db.models.Heatsink.findOne({ where: { name: 'N third' } }))!.convectionExponent).toBe(0.333);
+    expect((await ctx.db.models.Heatsink.findOne({ where: { name: 'N blank' } }))!.convectionExponent).toBeNull();
+  });
+
+  it('exports a convection_exponent column that the import maps back', async () => {
+    const res = await designer.get(`/api/heatsinks/export.csv?teamId=${teamId}`);
+    const lines = res.text.split('\r\n');
+    const headers = lines[0].split(',');
+    expect(headers.slice(0, 5)).toEqual(['name', 'description', 'rth_k_per_w', 'reference_rise_k', 'convection_exponent']);
+    const third = lines.find((l) => l.startsWith('N third,'))!.split(',');
+    const blank = lines.find((l) => l.startsWith('N blank,'))!.split(',');
+    expect(third[4]).toBe('0.333');
+    expect(blank[4]).toBe('');
+    const preview = await designer.post('/api/heatsinks/import/preview').attach('file', Buffer.from(res.text), 'back.csv');
+    expect(preview.body.suggestedMapping.convectionExponent).toEqual({ column: 'convection_exponent' });
+  });
+});

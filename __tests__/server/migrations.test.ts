@@ -17,7 +17,7 @@ describe('migrations', () => {
 
   it('create every table, apply once only, and roll back cleanly', async () => {
     expect(db.dialect).toBe(TEST_DIALECT);
-    expect(await migrateUp(db.sequelize)).toEqual(['0001-initial', '0002-team-work', '0003-catalogues', '0004-parts', '0005-team-settings', '0006-auth-attempts']);
+    expect(await migrateUp(db.sequelize)).toEqual(['0001-initial', '0002-team-work', '0003-catalogues', '0004-parts', '0005-team-settings', '0006-auth-attempts', '0007-convection-exponent']);
     expect(await migrateUp(db.sequelize)).toEqual([]);
     const tables = (await db.sequelize.getQueryInterface().showAllTables()).sort();
     expect(tables).toEqual(expect.arrayContaining([
@@ -29,7 +29,37 @@ describe('migrations', () => {
     const after = await db.sequelize.getQueryInterface().showAllTables();
     expect(after).not.toContain('users');
     expect(after).not.toContain('revisions');
-    expect(await migrateUp(db.sequelize)).toEqual(['0001-initial', '0002-team-work', '0003-catalogues', '0004-parts', '0005-team-settings', '0006-auth-attempts']);
+    expect(await migrateUp(db.sequelize)).toEqual(['0001-initial', '0002-team-work', '0003-catalogues', '0004-parts', '0005-team-settings', '0006-auth-attempts', '0007-convection-exponent']);
+  });
+
+  it('adds the heatsink convection exponent as a nullable column, keeps the rows on the way up and down', async () => {
+    await migrateUp(db.sequelize);
+    const migrator = createMigrator(db.sequelize);
+    const qi = db.sequelize.getQueryInterface();
+    await migrator.down({ to: '0007-convection-exponent' });
+    expect(Object.keys(await qi.describeTable('heatsinks'))).not.toContain('convection_exponent');
+    const now = new Date();
+    const teamId = (await db.models.Team.create({ name: 'Migrated' })).id;
+    await qi.bulkInsert('heatsinks', [{ team_id: teamId, name: 'Older sink', notes: '', is_demo: false, description: '', rth_k_per_w: 2, reference_rise_k: 75, forced_air: '[]', devices_per_sink: 1, created_at: now, updated_at: now }]);
+
+    expect(await migrateUp(db.sequelize)).toEqual(['0007-convection-exponent']);
+    const column = (await qi.describeTable('heatsinks')).convection_exponent;
+    expect(column).toMatchObject({ allowNull: true });
+    // A sink from before the column has no exponent: the laminar default applies.
+    const older = await db.models.Heatsink.findOne({ where: { name: 'Older sink' } });
+    expect(older!.convectionExponent).toBeNull();
+    await older!.update({ convectionExponent: 1 / 3 });
+    expect((await db.models.Heatsink.findByPk(older!.id))!.convectionExponent).toBeCloseTo(1 / 3, 12);
+
+    await migrator.down({ to: '0007-convection-exponent' });
+    expect(Object.keys(await qi.describeTable('heatsinks'))).not.toContain('convection_exponent');
+    // The rest of the table is as 0003 made it: its index, and the team's rows go with the team.
+    expect((await qi.showIndex('heatsinks') as { name: string }[]).map((i) => i.name)).toContain('heatsinks_team_name');
+    const [rows] = await db.sequelize.query(`SELECT name, rth_k_per_w FROM heatsinks WHERE name = 'Older sink'`);
+    expect(rows).toEqual([{ name: 'Older sink', rth_k_per_w: 2 }]);
+    expect(await migrateUp(db.sequelize)).toEqual(['0007-convection-exponent']);
+    await db.models.Team.destroy({ where: { id: teamId } });
+    expect(await db.models.Heatsink.count({ where: { name: 'Older sink' } })).toBe(0);
   });
 
   // Column types as each dialect's describeTable names them, by Sequelize data type.

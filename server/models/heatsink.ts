@@ -3,7 +3,10 @@ import type { Team } from './team';
 
 export type ForcedAirPoint = { airSpeedMPerS: number; rthKPerW: number };
 
-/** A team's catalogue heatsink. Rθsa is for still air at `referenceRiseK` above ambient. */
+/**
+ * A team's catalogue heatsink. Rθsa is for still air at `referenceRiseK` above ambient and
+ * scales with the rise as (ΔTref/ΔT)^convectionExponent; null is the laminar default, 1/4.
+ */
 export class Heatsink extends Model<InferAttributes<Heatsink>, InferCreationAttributes<Heatsink>> {
   declare id: CreationOptional<number>;
   declare teamId: ForeignKey<Team['id']>;
@@ -11,6 +14,7 @@ export class Heatsink extends Model<InferAttributes<Heatsink>, InferCreationAttr
   declare description: CreationOptional<string>;
   declare rthKPerW: number;
   declare referenceRiseK: number;
+  declare convectionExponent: CreationOptional<number | null>;
   declare forcedAir: ForcedAirPoint[];
   declare massKg: number | null;
   declare material: 'aluminium' | 'copper' | null;
@@ -33,6 +37,7 @@ export class Heatsink extends Model<InferAttributes<Heatsink>, InferCreationAttr
         description: { type: DataTypes.TEXT, allowNull: false, defaultValue: '' },
         rthKPerW: { type: DataTypes.DOUBLE, allowNull: false, field: 'rth_k_per_w' },
         referenceRiseK: { type: DataTypes.DOUBLE, allowNull: false, field: 'reference_rise_k' },
+        convectionExponent: { type: DataTypes.DOUBLE, allowNull: true, field: 'convection_exponent' },
         forcedAir: { type: DataTypes.JSON, allowNull: false, field: 'forced_air' },
         massKg: { type: DataTypes.DOUBLE, allowNull: true, field: 'mass_kg' },
         material: { type: DataTypes.STRING(16), allowNull: true },

@@ -12,6 +12,8 @@ const view = (h: Heatsink) => ({
   description: h.description,
   rthKPerW: h.rthKPerW,
   referenceRiseK: h.referenceRiseK,
+  /** n of Rθsa(ΔT) = Rθsa,ref (ΔTref/ΔT)^n; null is the laminar default, 1/4. */
+  convectionExponent: h.convectionExponent ?? null,
   forcedAir: h.forcedAir,
   massKg: h.massKg,
   material: h.material,
@@ -33,6 +35,7 @@ export const HEATSINK_FIELDS: FieldSpec[] = [
   { field: 'description', label: 'Description', kind: 'text', aliases: ['desc'] },
   { field: 'rthKPerW', label: 'Rθsa', kind: 'quantity', unit: 'thermalResistance', defaultUnit: 'K/W', units: ['K/W', '°C/W', 'C/W'], aliases: ['rth', 'rsa', 'rthsa', 'θsa', 'thermalresistance', 'rth_k_per_w'] },
   { field: 'referenceRiseK', label: 'Reference rise', kind: 'quantity', unit: 'temperatureDifference', defaultUnit: 'K', units: ['K', '°C'], aliases: ['rise', 'deltat', 'dt', 'reference_rise_k'] },
+  { field: 'convectionExponent', label: 'Convection exponent', kind: 'number', aliases: ['n', 'exponent', 'convection_exponent', 'naturalconvectionexponent'] },
   { field: 'massKg', label: 'Mass', kind: 'quantity', unit: 'mass', defaultUnit: 'g', units: ['g', 'kg'], aliases: ['weight', 'mass_kg'] },
   { field: 'material', label: 'Material', kind: 'choice', choices: ['aluminium', 'copper'], aliases: ['alloy'] },
   { field: 'capacityJPerK', label: 'Heat capacity', kind: 'quantity', unit: 'heatCapacity', defaultUnit: 'J/K', units: ['J/K', 'kJ/K'], aliases: ['capacity', 'cth', 'capacity_j_per_k'] },
@@ -74,12 +77,13 @@ export const heatsinks = catalogueService({
     return forcedAir.length ? { forcedAir } : {};
   },
   view: (row) => view(row as Heatsink),
-  exportHeaders: ['name', 'description', 'rth_k_per_w', 'reference_rise_k', 'mass_kg', 'material', 'capacity_j_per_k', 'width_mm', 'length_mm', 'height_mm', 'devices_per_sink', 'price', 'notes'],
+  exportHeaders: ['name', 'description', 'rth_k_per_w', 'reference_rise_k', 'convection_exponent', 'mass_kg', 'material', 'capacity_j_per_k', 'width_mm', 'length_mm', 'height_mm', 'devices_per_sink', 'price', 'notes'],
   exportRow: (h: HeatsinkView) => ({
     name: h.name,
     description: h.description,
     rth_k_per_w: h.rthKPerW,
     reference_rise_k: h.referenceRiseK,
+    convection_exponent: h.convectionExponent,
     mass_kg: h.massKg,
     material: h.material,
     capacity_j_per_k: h.capacityJPerK,

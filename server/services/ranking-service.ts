@@ -8,13 +8,13 @@ import { checkDocument } from './study-document';
 
 export type RankingQuery = { sinkId?: string; sortBy?: string; airSpeedMPerS?: number; ambientC?: number; marginK?: number };
 
-/** A catalogue row as the ranking core's candidate: still-air rating, forced-air points, mass, size, price. */
+/** A catalogue row as the ranking core's candidate: still-air rating (with its convection exponent when set), forced-air points, mass, size, price. */
 export function candidateOf(h: Heatsink): SinkCandidate {
   const volumeM3 = h.widthMm && h.lengthMm && h.heightMm ? (h.widthMm * h.lengthMm * h.heightMm) / 1e9 : undefined;
   return {
     id: String(h.id),
     name: h.name,
-    natural: { rthKPerW: h.rthKPerW, referenceRiseK: h.referenceRiseK },
+    natural: { rthKPerW: h.rthKPerW, referenceRiseK: h.referenceRiseK, ...(h.convectionExponent == null ? {} : { exponent: h.convectionExponent }) },
     forcedAir: h.forcedAir.length ? h.forcedAir : undefined,
     capacityJPerK: h.capacityJPerK ?? undefined,
     massKg: h.massKg ?? undefined,

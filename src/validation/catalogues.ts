@@ -18,7 +18,7 @@ export const forcedAirPointSchema = yup
   })
   .noUnknown(true, strict);
 
-/** A catalogue heatsink: Rθsa in still air at a stated rise, optional forced-air points. */
+/** A catalogue heatsink: Rθsa in still air at a stated rise (and its convection exponent), optional forced-air points. */
 export const heatsinkSchema = yup
   .object({
     teamId: yup.number().integer().positive().optional(),
@@ -26,6 +26,14 @@ export const heatsinkSchema = yup
     description: yup.string().trim().max(2000, 'Description is at most 2000 characters').default(''),
     rthKPerW: positive('Rθsa').max(1000, 'Rθsa above 1000 K/W is not a heatsink').required('Rθsa is required'),
     referenceRiseK: positive('Reference rise').max(300, 'Reference rise is at most 300 K').default(75),
+    // n of Rθsa(ΔT) = Rθsa,ref (ΔTref/ΔT)^n, in the range the heatsink core and the study's
+    // naturalConvection.exponent accept; null is the laminar default, 1/4.
+    convectionExponent: num('Convection exponent')
+      .min(0, 'Convection exponent must lie in 0…1 (1/4 for laminar natural convection)')
+      .max(1, 'Convection exponent must lie in 0…1 (1/4 for laminar natural convection)')
+      .nullable()
+      .optional()
+      .default(null),
     forcedAir: yup
       .array(forcedAirPointSchema)
       .max(20, 'At most 20 forced-air points')
