@@ -129,11 +129,14 @@ export const StudyResults = memo(function StudyResults({ document, onPickTime, s
   if (state.kind === 'empty') return null;
   return (
     <Card style={styles.card}>
-      <Text variant="heading">Results</Text>
+      {/* The updating note sits beside the heading, so its coming and going does not move the verdict and curves below. */}
+      <View style={styles.headingRow}>
+        <Text variant="heading">Results</Text>
+        {state.kind !== 'solving' && state.updating ? <UpdatingNote /> : null}
+      </View>
       {state.kind === 'solving' ? <LoadingState label="Solving the study…" /> : null}
       {state.kind === 'invalid' ? <Text tone="muted">No results: the saved document could not be read (see the design inputs).</Text> : null}
       {state.kind === 'failed' ? <InlineAlert message={`The study could not be solved: ${state.message}`} /> : null}
-      {state.kind !== 'solving' && state.updating ? <UpdatingNote /> : null}
       {/* One element for both states, so the curves and tables stay mounted when the full result follows its verdict. */}
       {state.kind === 'ok' || state.kind === 'verdict' ? <Solved summary={state.summary} result={state.kind === 'ok' ? state.result : state.previous} mains={mains} onPickTime={onPickTime} /> : null}
     </Card>
@@ -143,4 +146,5 @@ export const StudyResults = memo(function StudyResults({ document, onPickTime, s
 const styles = StyleSheet.create({
   card: { gap: spacing.md },
   actions: { flexDirection: 'row', flexWrap: 'wrap', gap: spacing.sm },
+  headingRow: { flexDirection: 'row', flexWrap: 'wrap', alignItems: 'center', columnGap: spacing.md, rowGap: spacing.xs },
 });

@@ -22,7 +22,8 @@ export function LiveVerdictPanel({ state, stale }: LiveVerdictPanelProps) {
       ) : null}
       {state.kind === 'ok' ? <VerdictPanel verdict={state.verdict} warnings={state.warnings} /> : null}
       {state.kind === 'failed' ? <InlineAlert message={`The study could not be solved: ${state.message}`} /> : null}
-      {state.kind !== 'waiting' && state.updating ? <UpdatingNote /> : null}
+      {/* The note's line stays while a verdict is shown, so the note coming and going does not move the editor below it (a long profile is costly to paint again). */}
+      {state.kind !== 'waiting' ? <View style={styles.noteLine}>{state.updating ? <UpdatingNote /> : null}</View> : null}
       {stale && state.kind !== 'waiting' ? (
         <Text variant="caption" tone="muted">
           From the last inputs without problems; fix the problems above to update it.
@@ -34,4 +35,6 @@ export function LiveVerdictPanel({ state, stale }: LiveVerdictPanelProps) {
 
 const styles = StyleSheet.create({
   box: { gap: spacing.xs },
+  /** The updating note's height: a small activity indicator (20 px) beside a caption line. */
+  noteLine: { minHeight: 20, justifyContent: 'center' },
 });
