@@ -1,5 +1,5 @@
 import { router } from 'expo-router';
-import { act, fireEvent, screen, within } from 'expo-router/testing-library';
+import { act, fireEvent, screen, waitFor, within } from 'expo-router/testing-library';
 
 import { api } from '@/api/client';
 import type { Heatsink } from '@/features/heatsinks/types';
@@ -29,6 +29,7 @@ const base: Omit<Heatsink, 'id' | 'name' | 'rthKPerW' | 'widthMm' | 'lengthMm' |
   teamId: 1,
   description: '',
   referenceRiseK: 75,
+  convectionExponent: null,
   forcedAir: [],
   material: 'aluminium',
   capacityJPerK: null,
@@ -51,6 +52,7 @@ const SINKS: Heatsink[] = [
     lengthMm: 100,
     heightMm: 40,
     massKg: 1.4,
+    convectionExponent: 0.33,
     forcedAir: [{ airSpeedMPerS: 2, rthKPerW: 0.25 }],
   },
 ];
@@ -130,6 +132,59 @@ describe('heatsink catalogue', () => {
     // W × L × H: 40·50·60 = 120,000 mm³; 100·100·5 = 50,000 mm³; 120·100·40 = 480,000 mm³.
     const order = screen.getAllByTestId(/^heatsink-card-/).map((card) => card.props.testID);
     expect(order).toEqual(['heatsink-card-2', 'heatsink-card-1', 'heatsink-card-4', 'heatsink-card-3']);
+  });
+
+  it('shows each sink’s convection exponent, the laminar 1/4 where the catalogue gives none', async () => {
+    routeApi(mockedApi, {
+      'GET /session': () => ok(sessionFor('reviewer')),
+      'GET /heatsinks': () => ok({ items: SINKS }),
+      'GET /heatsinks/4': () => ok({ item: SINKS[3] }),
+      'GET /heatsinks/1': () => ok({ item: SINKS[0] }),
+    });
+    renderApp('/heatsinks');
+    // Laminar natural convection, h ∝ ΔT^(1/4) (Incropera & DeWitt ch. 9, from memory): the default.
+    expect(within(await screen.findByTestId('heatsink-card-1')).getByText('Exponent n 1/4 (default)')).toBeVisible();
+    expect(within(screen.getByTestId('heatsink-card-4')).getByText('Exponent n 0.33')).toBeVisible();
+
+    act(() => router.push('/heatsinks/4'));
+    expect(await screen.findByText('Convection exponent n')).toBeVisible();
+    expect(screen.getByText('0.33')).toBeVisible();
+    act(() => router.push('/heatsinks/1'));
+    expect(await screen.findByText('1/4 (default)')).toBeVisible();
+  });
+
+  it('edits the exponent, fits it from a second still-air rating, and saves it with the sink', async () => {
+    const puts: Record<string, unknown>[] = [];
+    routeApi(mockedApi, {
+      'GET /session': () => ok(sessionFor('designer')),
+      'GET /heatsinks/1': () => ok({ item: SINKS[0] }),
+      'PUT /heatsinks/1': (body) => {
+        puts.push(body as Record<string, unknown>);
+        return ok({ item: { ...SINKS[0], ...(body as object) } });
+      },
+      'GET /heatsinks': () => ok({ items: SINKS }),
+    });
+    renderApp('/heatsinks/1/edit');
+
+    const field = await screen.findByLabelText('Convection exponent n');
+    expect(field.props.value).toBe('');
+    fireEvent.changeText(field, '1.5');
+    fireEvent.press(screen.getByRole('button', { name: 'Save changes' }));
+    expect(await screen.findByText('Convection exponent must lie in 0…1 (1/4 for laminar natural convection)')).toBeVisible();
+    expect(puts).toHaveLength(0);
+    expect(screen.getByLabelText('Convection exponent n').props.value).toBe('1.5');
+
+    // Turbulent natural convection, h ∝ ΔT^(1/3) (Incropera & DeWitt ch. 9, from memory): a sink
+    // rated 1.1 K/W at 75 K reads 1.1 × 2^(1/3) = 1.385906 K/W at 37.5 K (hand value).
+    fireEvent.press(screen.getByRole('button', { name: 'Fit n from a second still-air rating' }));
+    fireEvent.changeText(screen.getByLabelText('Rθsa of the second rating, K/W'), '1.385906');
+    fireEvent.changeText(screen.getByLabelText('Rise of the second rating, K'), '37.5');
+    fireEvent.press(await screen.findByRole('button', { name: 'Use n = 0.333' }));
+    expect(screen.getByLabelText('Convection exponent n').props.value).toBe('0.333');
+    fireEvent.press(screen.getByRole('button', { name: 'Save changes' }));
+
+    await waitFor(() => expect(puts).toHaveLength(1));
+    expect(puts[0].convectionExponent).toBe(0.333);
   });
 
   it('lists every row problem of a refused import and says that nothing was saved', async () => {

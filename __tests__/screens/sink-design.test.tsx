@@ -93,6 +93,10 @@ describe('design a sink from geometry', () => {
     const { candidate } = plateFinCandidate(START, { id: 'x', referenceRiseK: 50, airSpeedsMPerS: [1, 2, 4], ambientC: 25 });
     expect(body).toMatchObject({ teamId: 1, name: 'Test extrusion (estimate)', referenceRiseK: 50, material: 'aluminium', devicesPerSink: 1 });
     assertInRelDelta(body.rthKPerW as number, candidate.natural!.rthKPerW, 1e-12, 'Rθsa at 50 K');
+    // The model's own exponent, n = ln(R(25 K)/R(50 K)) / ln 2, goes with the sink: near the
+    // laminar 1/4 (Incropera & DeWitt ch. 9, from memory) for this extrusion.
+    assertInRelDelta(body.convectionExponent as number, candidate.natural!.exponent!, 1e-12, 'exponent');
+    assertInDelta(body.convectionExponent as number, 0.25, 0.05, 'exponent near laminar');
     expect(body.forcedAir).toEqual(candidate.forcedAir);
     // Metal: the base W·L·tb plus the fins N·t·H·L = 37.5 + 37.5 cm³ = 75 cm³; at 2700 kg/m³ that is
     // 202.5 g, and × 900 J/(kg·K) 182.25 J/K (aluminium, Incropera & DeWitt Table A.1, rounded for 6063).

@@ -1,5 +1,6 @@
 import {
   capacityFromMass,
+  convectionExponentFromRatings,
   capacityFromVolume,
   forcedAirRsa,
   massFromVolume,
@@ -29,6 +30,30 @@ describe('naturalConvectionRsa', () => {
   it('names the field of a bad argument', () => {
     expect(() => naturalConvectionRsa(-1, 50, 10)).toThrow('rsaRefKPerW: must be > 0');
     expect(() => naturalConvectionRsa(1, 50, 10, 2)).toThrow('exponent: must lie in 0…1');
+  });
+});
+
+describe('convectionExponentFromRatings', () => {
+  it('recovers n from two ratings of one sink on the law Rθ(ΔT) = Rθref (ΔTref/ΔT)^n', () => {
+    // Laminar, n = 1/4 (Incropera & DeWitt ch. 9): 2 K/W at 75 K reads 2.514866 K/W at 30 K
+    // (the hand value above), so ln(2.514866/2) / ln(75/30) = 0.25.
+    assertNear(convectionExponentFromRatings({ rthKPerW: 2.514866, riseK: 30 }, { rthKPerW: 2, riseK: 75 }), 0.25, 1e-6, 'laminar n');
+    // Turbulent natural convection, Nu ∝ Ra^(1/3), so h ∝ ΔT^(1/3) (Incropera & DeWitt ch. 9,
+    // from memory): 1.5 K/W at 50 K reads 1.5 × 2^(1/3) = 1.889882 K/W at 25 K (hand value).
+    assertNear(convectionExponentFromRatings({ rthKPerW: 1.5, riseK: 50 }, { rthKPerW: 1.889882, riseK: 25 }), 1 / 3, 1e-6, 'turbulent n');
+  });
+
+  it('gives the same n in either order, and n outside 0…1 as found', () => {
+    const a = { rthKPerW: 1.2, riseK: 40 };
+    const b = { rthKPerW: 0.95, riseK: 80 };
+    assertNear(convectionExponentFromRatings(a, b), convectionExponentFromRatings(b, a), 1e-15, 'order');
+    // Rθsa rising with the rise: a negative n, left for the caller to refuse.
+    expect(convectionExponentFromRatings({ rthKPerW: 1, riseK: 40 }, { rthKPerW: 1.1, riseK: 80 })).toBeLessThan(0);
+  });
+
+  it('names the field of a bad rating', () => {
+    expect(() => convectionExponentFromRatings({ rthKPerW: 1, riseK: 50 }, { rthKPerW: 0.8, riseK: 50 })).toThrow('b.riseK: must differ from a.riseK');
+    expect(() => convectionExponentFromRatings({ rthKPerW: -1, riseK: 50 }, { rthKPerW: 0.8, riseK: 60 })).toThrow('a.rthKPerW: must be > 0');
   });
 });
 

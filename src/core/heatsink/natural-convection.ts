@@ -36,3 +36,19 @@ export function naturalConvectionSteady(
   const rsa = rsaRefKPerW * Math.pow(referenceRiseK / MIN_CONVECTION_RISE_K, exponent);
   return { riseK: rsa * powerW, rsaKPerW: rsa };
 }
+
+/** A still-air rating: Rθsa at a sink rise. */
+export type RiseRating = { rthKPerW: number; riseK: number };
+
+/**
+ * The exponent n of Rsa(ΔT) = Rsa,ref (ΔTref/ΔT)^n through two still-air ratings of one sink:
+ * n = ln(R1/R2) / ln(ΔT2/ΔT1). Returned as found, so a caller can say when it falls outside 0…1.
+ */
+export function convectionExponentFromRatings(a: RiseRating, b: RiseRating): number {
+  checkPositive(a.rthKPerW, 'a.rthKPerW');
+  checkPositive(a.riseK, 'a.riseK');
+  checkPositive(b.rthKPerW, 'b.rthKPerW');
+  checkPositive(b.riseK, 'b.riseK');
+  if (a.riseK === b.riseK) throw new RangeError('b.riseK: must differ from a.riseK to fit an exponent');
+  return Math.log(a.rthKPerW / b.rthKPerW) / Math.log(b.riseK / a.riseK);
+}

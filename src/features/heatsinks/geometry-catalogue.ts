@@ -31,7 +31,7 @@ export function plateFinCatalogueBody(name: string, estimate: PlateFinEstimate, 
   const exponent = candidate.natural?.exponent ?? 0.25;
   const head = [
     ESTIMATE_HEAD,
-    `Still air: Rθsa ${formatNumber(natural.rsaKPerW)} K/W at a ${formatNumber(referenceRiseK)} K rise in ${formatNumber(natural.ambientC)} °C ambient; the model's own rise exponent is n = ${formatNumber(exponent)} (studies apply 1/4 unless the sink gives another).`,
+    `Still air: Rθsa ${formatNumber(natural.rsaKPerW)} K/W at a ${formatNumber(referenceRiseK)} K rise in ${formatNumber(natural.ambientC)} °C ambient; the model's own rise exponent n = ${formatNumber(exponent)} is kept as the sink's convection exponent.`,
     forced.length ? `Forced air: ${forced.map((f) => `${formatNumber(f.rsaKPerW)} K/W at ${formatNumber(f.airSpeedMPerS)} m/s`).join(', ')} (ducted laminar flow).` : 'No forced-air points.',
   ];
   return {
@@ -40,6 +40,7 @@ export function plateFinCatalogueBody(name: string, estimate: PlateFinEstimate, 
     description: `Plate-fin extrusion estimated from its geometry: ${mm(g.baseWidthM)} × ${mm(g.lengthM)} mm base ${mm(g.baseThicknessM)} mm thick, ${g.finCount} fins ${mm(g.finHeightM)} mm tall and ${mm(g.finThicknessM)} mm thick, ${g.material}, emissivity ${formatNumber(g.emissivity)}.`,
     rthKPerW: natural.rsaKPerW,
     referenceRiseK,
+    convectionExponent: exponent,
     forcedAir: (candidate.forcedAir ?? []).map((p) => ({ airSpeedMPerS: p.airSpeedMPerS, rthKPerW: p.rthKPerW })),
     massKg: candidate.massKg ?? estimate.massKg,
     material: g.material,

@@ -10,6 +10,7 @@ export type HeatsinkFormValues = {
   description: string;
   rthKPerW: string;
   referenceRiseK: string;
+  convectionExponent: string;
   forcedAir: ForcedAirRow[];
   massG: string;
   material: '' | 'aluminium' | 'copper';
@@ -31,6 +32,7 @@ export function emptyHeatsinkValues(): HeatsinkFormValues {
     description: '',
     rthKPerW: '',
     referenceRiseK: String(DEFAULT_REFERENCE_RISE_K),
+    convectionExponent: '',
     forcedAir: [],
     massG: '',
     material: '',
@@ -50,6 +52,7 @@ export function heatsinkValues(h: Heatsink): HeatsinkFormValues {
     description: h.description,
     rthKPerW: textOf(h.rthKPerW),
     referenceRiseK: textOf(h.referenceRiseK),
+    convectionExponent: textOf(h.convectionExponent),
     forcedAir: h.forcedAir.map((p) => ({ airSpeedMPerS: textOf(p.airSpeedMPerS), rthKPerW: textOf(p.rthKPerW) })),
     // Rounded to µg so kg → g does not show binary noise (0.084 kg → 84 g, not 84.00000000000001).
     massG: h.massKg === null ? '' : String(Number((h.massKg * 1000).toFixed(6))),
@@ -74,6 +77,7 @@ export function heatsinkInput(v: HeatsinkFormValues): Record<string, unknown> {
     description: v.description,
     rthKPerW: required(v.rthKPerW),
     referenceRiseK: required(v.referenceRiseK),
+    convectionExponent: numberOrNull(v.convectionExponent),
     forcedAir: v.forcedAir.map((p) => ({ airSpeedMPerS: required(p.airSpeedMPerS), rthKPerW: required(p.rthKPerW) })),
     massKg: grams === null ? null : grams / 1000,
     material: v.material === '' ? null : v.material,

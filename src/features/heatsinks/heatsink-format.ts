@@ -5,6 +5,9 @@ import type { Heatsink } from './types';
 export const formatRth = (h: Pick<Heatsink, 'rthKPerW' | 'referenceRiseK'>) =>
   `${formatQuantity(h.rthKPerW, 'K/W')} at ${formatQuantity(h.referenceRiseK, 'K')} rise`;
 
+/** The still-air rise exponent n: "0.33", or "1/4 (default)" when the catalogue gives none. */
+export const formatExponent = (n: number | null) => (n === null ? '1/4 (default)' : formatNumber(n));
+
 /** "1 m/s 0.62 · 2 m/s 0.46 K/W", or "—" in still air only. */
 export function formatForcedAir(points: Heatsink['forcedAir']): string {
   if (points.length === 0) return '—';

@@ -7,6 +7,8 @@ export type Heatsink = {
   /** Rθsa in still air at the reference rise. */
   rthKPerW: number;
   referenceRiseK: number;
+  /** n of Rθsa(ΔT) = Rθsa,ref (ΔTref/ΔT)^n in still air; null for the laminar default, 1/4. */
+  convectionExponent: number | null;
   forcedAir: { airSpeedMPerS: number; rthKPerW: number }[];
   massKg: number | null;
   material: 'aluminium' | 'copper' | null;

@@ -4,7 +4,7 @@ import { PressableLink, Text } from '@/components/ui';
 import { color, radius, spacing } from '@/constants/theme';
 import { DemoBadge } from '@/features/catalogues/components/demo-badge';
 
-import { formatForcedAir, formatMass, formatPrice, formatRth, formatSize } from '../heatsink-format';
+import { formatExponent, formatForcedAir, formatMass, formatPrice, formatRth, formatSize } from '../heatsink-format';
 import type { Heatsink } from '../types';
 
 export type HeatsinkCardProps = { heatsink: Heatsink };
@@ -20,6 +20,9 @@ export function HeatsinkCard({ heatsink: h }: HeatsinkCardProps) {
         {h.isDemo ? <DemoBadge /> : null}
       </View>
       <Text>Rθsa {formatRth(h)}</Text>
+      <Text variant="caption" tone="muted">
+        Exponent n {formatExponent(h.convectionExponent)}
+      </Text>
       {h.forcedAir.length ? (
         <Text variant="caption" tone="muted">
           Forced air: {formatForcedAir(h.forcedAir)}

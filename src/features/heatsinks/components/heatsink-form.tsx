@@ -11,6 +11,7 @@ import { heatsinkSchema } from '@/validation';
 import { useSaveHeatsink } from '../api';
 import { heatsinkInput, type HeatsinkFormValues } from '../heatsink-form-values';
 import type { Heatsink } from '../types';
+import { ExponentFit } from './exponent-fit';
 import { ForcedAirPoints } from './forced-air-points';
 
 export type HeatsinkFormProps = {
@@ -83,7 +84,11 @@ export function HeatsinkForm({ initial, id, teamId, onSaved, onCancel }: Heatsin
       <View style={styles.grid}>
         {field('rthKPerW', 'Rθsa in still air', { unit: 'K/W' })}
         {field('referenceRiseK', 'Reference rise', { unit: 'K', hint: 'The sink rise above ambient the still-air Rθsa is rated at.' })}
+        {field('convectionExponent', 'Convection exponent n', {
+          hint: 'How still-air Rθsa falls as the sink runs hotter: Rθsa × (reference rise / rise)^n, n from 0 to 1. Empty for 1/4, laminar natural convection; higher for turbulent flow (1/3) or a sink that sheds much by radiation.',
+        })}
       </View>
+      <ExponentFit rthKPerW={form.values.rthKPerW} referenceRiseK={form.values.referenceRiseK} onUse={(text) => form.setFieldValue('convectionExponent', text)} />
       <ForcedAirPoints
         points={form.values.forcedAir}
         onChange={(points) => form.setFieldValue('forcedAir', points)}

@@ -5,12 +5,13 @@ import { Text } from '@/components/ui';
 import { color, radius, spacing } from '@/constants/theme';
 import { DemoBadge } from '@/features/catalogues/components/demo-badge';
 
-import { formatForcedAir, formatMass, formatPrice, formatRth, formatSize } from '../heatsink-format';
+import { formatExponent, formatForcedAir, formatMass, formatPrice, formatRth, formatSize } from '../heatsink-format';
 import type { Heatsink } from '../types';
 
 const COLUMNS = [
   { label: 'Name', flex: 2.6 },
   { label: 'Rθsa, still air', flex: 1.6 },
+  { label: 'Exponent n', flex: 1.1 },
   { label: 'Forced air, Rθsa', flex: 2.4 },
   { label: 'Mass', flex: 0.9 },
   { label: 'Size W × L × H', flex: 1.5 },
@@ -33,7 +34,7 @@ export function HeatsinkTable({ items }: HeatsinkTableProps) {
         ))}
       </View>
       {items.map((h, i) => {
-        const cells = [formatRth(h), formatForcedAir(h.forcedAir), formatMass(h.massKg), formatSize(h), String(h.devicesPerSink), formatPrice(h.price)];
+        const cells = [formatRth(h), formatExponent(h.convectionExponent), formatForcedAir(h.forcedAir), formatMass(h.massKg), formatSize(h), String(h.devicesPerSink), formatPrice(h.price)];
         return (
           <View key={h.id} role="row" testID={`heatsink-row-${h.id}`} style={[styles.row, i < items.length - 1 && styles.divider]}>
             <View role="cell" style={[styles.cell, styles.name, { flex: COLUMNS[0].flex }]}>
@@ -46,7 +47,7 @@ export function HeatsinkTable({ items }: HeatsinkTableProps) {
             </View>
             {cells.map((text, k) => (
               <View key={COLUMNS[k + 1].label} role="cell" style={[styles.cell, { flex: COLUMNS[k + 1].flex }]}>
-                <Text variant={k === 1 ? 'caption' : 'body'} tone={text === '—' ? 'faint' : 'default'}>
+                <Text variant={k === 2 ? 'caption' : 'body'} tone={text === '—' ? 'faint' : 'default'}>
                   {text}
                 </Text>
               </View>
