@@ -19,6 +19,8 @@ export type CatalogueSink = {
   name: string;
   rthKPerW: number;
   referenceRiseK: number;
+  /** Null: the catalogue gives no exponent (laminar 1/4). */
+  convectionExponent?: number | null;
   forcedAir: { airSpeedMPerS: number; rthKPerW: number }[];
   massKg: number | null;
   material: 'aluminium' | 'copper' | null;
@@ -45,7 +47,8 @@ export type SinkAir = { kind: 'still' } | { kind: 'forced'; airSpeedMPerS: numbe
 
 /**
  * The sink with the catalogue entry's values: still air (Rθsa at the reference rise, natural
- * convection) or the forced-air curve at one speed; heat capacity given, or mass and material.
+ * convection, with the entry's exponent when it gives one, else the sink's own) or the
+ * forced-air curve at one speed; heat capacity given, or mass and material.
  * Its id and `to` stay.
  */
 export function sinkFromCatalogue(sink: RawSink, entry: CatalogueSink, air: SinkAir): RawSink {
@@ -55,7 +58,7 @@ export function sinkFromCatalogue(sink: RawSink, entry: CatalogueSink, air: Sink
     next.forcedAir = { airSpeedMPerS: air.airSpeedMPerS, points: copy(entry.forcedAir) };
   } else {
     next.rthKPerW = entry.rthKPerW;
-    const exponent = sink.naturalConvection?.exponent;
+    const exponent = entry.convectionExponent ?? sink.naturalConvection?.exponent;
     next.naturalConvection = exponent === undefined ? { referenceRiseK: entry.referenceRiseK } : { referenceRiseK: entry.referenceRiseK, exponent };
   }
   if (entry.capacityJPerK !== null) next.capacityJPerK = entry.capacityJPerK;
