@@ -1,9 +1,10 @@
-import { act, renderHook } from '@testing-library/react-native';
+import { act, render, renderHook, screen, within } from '@testing-library/react-native';
 
 import { evaluateStudy, parseStudy } from '@/core/study';
 import type { SolveOutcome, SolveReply, SolveRequest } from '@/features/results/solve-outcome';
 import { receivedDocument, solveDocument } from '@/features/results/solve-outcome';
 import type { SolverChannel } from '@/features/results/solver-channel';
+import { StudyResults } from '@/features/results/study-results';
 import { useSolve, type SolveState } from '@/features/results/use-solve';
 import { useStudyResult, type StudyResultState } from '@/features/results/use-study-result';
 import { RESTART_COST_MS, workerChannel, type WorkerLike } from '@/features/results/worker-channel';
@@ -243,6 +244,31 @@ describe('solving off the render path', () => {
     channel.solve(study(20), {}, () => undefined);
     channel.solve({ ...edited, ambient: { temperatureC: 30 } }, {}, () => undefined);
     expect(FakeWorker.made[1].posted[0].kept).toBeUndefined();
+  });
+
+  it('shows the verdict line of an edit ahead of its curves and tables, which follow its full result', async () => {
+    mockChannel = () => workerChannel(() => new FakeWorker());
+    try {
+      const view = render(<StudyResults document={study(10)} seriesPoints={50} verdictFirst />);
+      await act(async () => FakeWorker.made[0].answer(0));
+      // Tj = 25 + 10 W × 2 K/W = 45 °C (Ohm's law for heat, common practice).
+      expect(within(screen.getByLabelText('Devices')).getByText('45\u00a0°C')).toBeVisible();
+      view.rerender(<StudyResults document={study(100)} seriesPoints={50} verdictFirst />);
+      const worker = FakeWorker.made[0];
+      const full = worker.onmessage!;
+      let held: SolveReply | null = null;
+      worker.onmessage = (event) => ('ahead' in event.data ? full(event) : (held = event.data));
+      await act(async () => worker.answer(1));
+      // Tj = 25 + 100 W × 2 K/W = 225 °C, 95 K over the 130 °C target: the verdict says so while the table still shows the last result.
+      expect(screen.getByText(/^Fails: Q1 exceeds its 130\s°C target by 95\sK/)).toBeVisible();
+      expect(within(screen.getByLabelText('Devices')).getByText('45\u00a0°C')).toBeVisible();
+      expect(screen.getByText('Updating with your latest edit…')).toBeVisible();
+      await act(async () => full({ data: held! }));
+      expect(within(screen.getByLabelText('Devices')).getByText('225\u00a0°C')).toBeVisible();
+      expect(screen.queryByText('Updating with your latest edit…')).toBeNull();
+    } finally {
+      mockChannel = null;
+    }
   });
 
   it('solves on the main thread when the worker cannot load', () => {

@@ -1,4 +1,4 @@
-import { memo, useDeferredValue, useMemo, useState } from 'react';
+import { memo, useDeferredValue, useEffect, useMemo, useState } from 'react';
 import { StyleSheet, View } from 'react-native';
 
 import { HeatCurvesChart } from '@/charts/heat-curves-chart';
@@ -33,26 +33,29 @@ export type StudyResultsProps = {
   verdictFirst?: boolean;
 };
 
-type SolvedProps = { summary: VerdictSummary; result: StudyResult | null; mains: MainsCaution | null; onPickTime?: (timeS: number) => void };
-type DetailsProps = { result: StudyResult; mains: MainsCaution | null; onPickTime?: (timeS: number) => void };
+type SolvedProps = { summary: VerdictSummary; result: StudyResult | null; updating: boolean; mains: MainsCaution | null; onPickTime?: (timeS: number) => void };
+type DetailsProps = { result: StudyResult; mains: MainsCaution | null; onPickTime?: (timeS: number) => void; onDrawn: (result: StudyResult) => void };
 
 /**
  * The verdict follows each result at once (with `verdictFirst`, ahead of it); the curves, tables
  * and panels below follow a moment later (a deferred render React may interrupt), so the
- * verdict and the fields never wait on them.
+ * verdict and the fields never wait on them. While a newer edit is solved (`updating`) they
+ * stay as drawn: drawing them for a result already superseded would take the time the solve needs.
  */
-function Solved({ summary, result, mains, onPickTime }: SolvedProps) {
-  const details = useDeferredValue(result);
+function Solved({ summary, result, updating, mains, onPickTime }: SolvedProps) {
+  const [drawn, setDrawn] = useState<StudyResult | null>(result);
+  const details = useDeferredValue(updating ? drawn : result);
   return (
     <>
       {/* Warnings the SOA and rail-plan panels show in full are not repeated above the curves. */}
       <VerdictPanel verdict={summary.verdict} warnings={summary.ownWarnings} />
-      {details ? <Details result={details} mains={mains} onPickTime={onPickTime} /> : null}
+      {details ? <Details result={details} mains={mains} onPickTime={onPickTime} onDrawn={setDrawn} /> : null}
     </>
   );
 }
 
-const Details = memo(function Details({ result, mains, onPickTime }: DetailsProps) {
+const Details = memo(function Details({ result, mains, onPickTime, onDrawn }: DetailsProps) {
+  useEffect(() => onDrawn(result), [result, onDrawn]);
   const wide = useIsWide();
   const [cursorS, setCursorS] = useState<number | null>(null);
   const devices = useMemo(() => Object.values(result.devices), [result]);
@@ -138,7 +141,7 @@ export const StudyResults = memo(function StudyResults({ document, onPickTime, s
       {state.kind === 'invalid' ? <Text tone="muted">No results: the saved document could not be read (see the design inputs).</Text> : null}
       {state.kind === 'failed' ? <InlineAlert message={`The study could not be solved: ${state.message}`} /> : null}
       {/* One element for both states, so the curves and tables stay mounted when the full result follows its verdict. */}
-      {state.kind === 'ok' || state.kind === 'verdict' ? <Solved summary={state.summary} result={state.kind === 'ok' ? state.result : state.previous} mains={mains} onPickTime={onPickTime} /> : null}
+      {state.kind === 'ok' || state.kind === 'verdict' ? <Solved summary={state.summary} result={state.kind === 'ok' ? state.result : state.previous} updating={Boolean(state.updating)} mains={mains} onPickTime={onPickTime} /> : null}
     </Card>
   );
 });
