@@ -1,4 +1,4 @@
-import { evaluateStudy, INTERACTIVE_MAX_STRETCHES, parseStudy, type StudyDocument, type StudyResult } from '@/core/study';
+import { evaluateStudy, INTERACTIVE_MAX_STRETCHES, parseStudy, type ParseCache, type StudyDocument, type StudyResult } from '@/core/study';
 
 import { verdictSummary, type VerdictSummary } from './verdict-summary';
 
@@ -25,11 +25,13 @@ const messageOf = (error: unknown) => (error instanceof Error ? error.message : 
 /**
  * Parses and solves a study document with the core's pipeline, within the interactive work
  * budget. `ahead` is handed the verdict line as soon as it is known, before the outcome is returned.
+ * `cache` keeps parsed profiles for a caller whose raw documents are never changed in place
+ * (the worker's own copies), so a kept profile is not parsed again.
  */
-export function solveDocument(raw: unknown, options: SolveOptions = {}, ahead?: (summary: VerdictSummary) => void): SolveOutcome {
+export function solveDocument(raw: unknown, options: SolveOptions = {}, ahead?: (summary: VerdictSummary) => void, cache?: ParseCache): SolveOutcome {
   let document: StudyDocument;
   try {
-    document = parseStudy(raw);
+    document = parseStudy(raw, cache);
   } catch (error) {
     return { kind: 'invalid', message: messageOf(error) };
   }

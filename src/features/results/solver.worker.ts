@@ -1,3 +1,5 @@
+import { createParseCache } from '@/core/study';
+
 import { receivedDocument, solveDocument, type SolveReply, type SolveRequest } from './solve-outcome';
 
 /**
@@ -10,12 +12,14 @@ const scope = self as unknown as { onmessage: ((event: MessageEvent<SolveRequest
 
 /** The document of the last request, whose parts the next one may keep. */
 let before: unknown = null;
+/** Parsed profiles by this worker's copy of the raw profile (a kept profile is the same object). */
+const parsed = createParseCache();
 
 scope.onmessage = (event) => {
   const { id, options } = event.data;
   const raw = receivedDocument(event.data, before);
   before = raw;
   const start = performance.now();
-  const outcome = solveDocument(raw, options, options.verdictFirst ? (ahead) => scope.postMessage({ id, ahead }) : undefined);
+  const outcome = solveDocument(raw, options, options.verdictFirst ? (ahead) => scope.postMessage({ id, ahead }) : undefined, parsed);
   scope.postMessage({ id, outcome, solveMs: performance.now() - start });
 };
