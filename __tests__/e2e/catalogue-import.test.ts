@@ -137,6 +137,20 @@ describe.each([
     await page.getByText('Demo', { exact: true }).first().waitFor();
     await screenshot(page, viewport, 'heatsinks');
 
+    // The seeded demo sinks give no exponent: each shows the laminar default, n = 1/4.
+    const first = (await apiHeatsinks(page)).find((h) => h.isDemo)!;
+    await page.goto(`${baseUrl()}/heatsinks/${first.id}`);
+    await page.getByText('Convection exponent n', { exact: true }).waitFor();
+    expect(await page.getByText('1/4 (default)', { exact: true }).count()).toBe(1);
+    await screenshot(page, viewport, 'heatsink-detail');
+    await page.goto(`${baseUrl()}/heatsinks/${first.id}/edit`);
+    await page.getByRole('button', { name: 'Fit n from a second still-air rating' }).click();
+    await page.getByLabel('Rθsa of the second rating, K/W').fill(String(first.rthKPerW * 1.2));
+    await page.getByLabel('Rise of the second rating, K').fill('37.5');
+    await page.getByRole('button', { name: /^Use n = / }).waitFor();
+    await scrollToTop(page.getByText('Thermal', { exact: true }));
+    await screenshot(page, viewport, 'heatsink-form-exponent');
+
     await page.goto(`${baseUrl()}/heatsinks/import`);
     await page.locator('input[type=file]').first().setInputFiles(vendorCsv(`shot${viewport.width}`, '1.1'));
     await scrollToTop(page.getByRole('heading', { name: '3. Columns' }));

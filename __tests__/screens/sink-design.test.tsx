@@ -1,7 +1,7 @@
 import { fireEvent, screen, waitFor, within } from 'expo-router/testing-library';
 
 import { api } from '@/api/client';
-import { flatPlateAtPower, plateFinCandidate, plateFinNaturalAtPower, type PlateFinGeometry } from '@/core/heatsink';
+import { flatPlateAtPower, flatPlateAtRise, plateFinCandidate, plateFinNaturalAtPower, type PlateFinGeometry } from '@/core/heatsink';
 
 import { assertInDelta, assertInRelDelta } from '../helpers/assert-in-delta';
 import { sessionFor } from './support/fixtures';
@@ -119,6 +119,29 @@ describe('design a sink from geometry', () => {
     const core = flatPlateAtPower({ heightM: 0.05, widthM: 0.04, thicknessM: 35e-6, material: 'copper', emissivity: 0.9, faces: 2 }, 2, { ambientC: 25 });
     expect(within(estimate).getByText(kPerW(core.rsaKPerW))).toBeVisible();
     expect(within(estimate).getByText(new RegExp(`about ${Number(core.rsaWithSpreadingKPerW.toPrecision(3))}\\sK/W`))).toBeVisible();
+  });
+
+  it('saves a copper area with the rise exponent of its own model', async () => {
+    const { posted } = open();
+    fireEvent.press(await screen.findByRole('radio', { name: 'Flat plate or PCB copper' }));
+    await screen.findByTestId('flat-plate-estimate');
+    fireEvent.press(screen.getByRole('button', { name: 'Save to catalogue' }));
+    await waitFor(() => expect(posted).toHaveLength(1));
+    const body = posted[0];
+    // Rated at the form's 50 K: n through the model's Rθsa (spreading included) at 25 K and 50 K
+    // on Rθ(ΔT) = Rθref (ΔTref/ΔT)^n (Incropera & DeWitt ch. 9, from memory).
+    const g = { heightM: 0.05, widthM: 0.04, thicknessM: 35e-6, material: 'copper' as const, emissivity: 0.9, faces: 2 as const };
+    const at50 = flatPlateAtRise(g, 50, { ambientC: 25 });
+    const at25 = flatPlateAtRise(g, 25, { ambientC: 25 });
+    expect(body).toMatchObject({ referenceRiseK: 50, material: 'copper' });
+    assertInRelDelta(body.rthKPerW as number, at50.rsaWithSpreadingKPerW, 1e-12, 'Rθsa at 50 K');
+    assertInRelDelta(body.convectionExponent as number, Math.log(at25.rsaWithSpreadingKPerW / at50.rsaWithSpreadingKPerW) / Math.LN2, 1e-9, 'exponent');
+    // Radiation, hr = εσ(Ts² + T∞²)(Ts + T∞) (Incropera & DeWitt eq. 1.9), grows by only
+    // (323² + 298²)(621) → (348² + 298²)(646), ×1.131, from 25 K to 50 K (n ≈ 0.18, hand value),
+    // and a thin copper area spreads worse as h grows: n lies below the laminar 1/4.
+    expect(body.convectionExponent).toBeGreaterThan(0);
+    expect(body.convectionExponent).toBeLessThan(0.25);
+    expect(body.notes).toMatch(/rise exponent n = 0\.\d+ is kept as the sink's convection exponent/);
   });
 
   it('lets reviewers estimate but not save', async () => {

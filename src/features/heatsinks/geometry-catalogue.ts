@@ -1,4 +1,4 @@
-import { flatPlateAtRise, type EstimateNotes, type ValidityCheck } from '@/core/heatsink';
+import { convectionExponentFromRatings, flatPlateAtRise, type EstimateNotes, type ValidityCheck } from '@/core/heatsink';
 import { formatNumber } from '@/features/studies/quantity-format';
 
 import { checkRange, formatCheckValue, mergeNotes } from './check-format';
@@ -58,9 +58,15 @@ export function plateFinCatalogueBody(name: string, estimate: PlateFinEstimate, 
 export function flatPlateCatalogueBody(name: string, design: FlatPlateDesign, referenceRiseK: number, teamId?: number): Record<string, unknown> {
   const g = design.geometry;
   const rated = flatPlateAtRise(g, referenceRiseK, { ambientC: design.natural.ambientC });
+  // The model's own rise exponent, as for a plate-fin: n = ln(R(ΔT/2)/R(ΔT)) / ln 2, spreading included.
+  const half = flatPlateAtRise(g, referenceRiseK / 2, { ambientC: design.natural.ambientC });
+  const n = convectionExponentFromRatings({ rthKPerW: half.rsaWithSpreadingKPerW, riseK: referenceRiseK / 2 }, { rthKPerW: rated.rsaWithSpreadingKPerW, riseK: referenceRiseK });
+  const exponent = n >= 0 && n <= 1 ? n : null;
   const head = [
     ESTIMATE_HEAD,
-    `Still air: Rθsa ${formatNumber(rated.rsaWithSpreadingKPerW)} K/W at a ${formatNumber(referenceRiseK)} K rise in ${formatNumber(rated.ambientC)} °C ambient, spreading included (isothermal plate: ${formatNumber(rated.rsaKPerW)} K/W, spreading efficiency ${formatNumber(rated.spreadingEfficiency)}).`,
+    `Still air: Rθsa ${formatNumber(rated.rsaWithSpreadingKPerW)} K/W at a ${formatNumber(referenceRiseK)} K rise in ${formatNumber(rated.ambientC)} °C ambient, spreading included (isothermal plate: ${formatNumber(rated.rsaKPerW)} K/W, spreading efficiency ${formatNumber(rated.spreadingEfficiency)}); ${
+      exponent === null ? `the model's own rise exponent, ${formatNumber(n)}, lies outside 0…1 and is not kept` : `the model's own rise exponent n = ${formatNumber(exponent)} is kept as the sink's convection exponent`
+    }.`,
   ];
   return {
     ...(teamId === undefined ? {} : { teamId }),
@@ -68,6 +74,7 @@ export function flatPlateCatalogueBody(name: string, design: FlatPlateDesign, re
     description: `${g.material === 'copper' ? 'Copper' : 'Aluminium'} plate estimated from its geometry: ${mm(g.heightM)} mm tall, ${mm(g.widthM)} mm wide, ${mm(g.thicknessM)} mm thick, ${g.faces === 1 ? 'one face' : 'both faces'} shedding heat, emissivity ${formatNumber(g.emissivity)}.`,
     rthKPerW: rated.rsaWithSpreadingKPerW,
     referenceRiseK,
+    convectionExponent: exponent,
     forcedAir: [],
     massKg: design.massKg,
     material: g.material,

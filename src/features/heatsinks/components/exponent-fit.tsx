@@ -1,7 +1,7 @@
 import { useState } from 'react';
 import { StyleSheet, View } from 'react-native';
 
-import { Button, Text, TextField } from '@/components/ui';
+import { Button, Text, TextField, useIsWide } from '@/components/ui';
 import { spacing } from '@/constants/theme';
 import { numberOrNull } from '@/features/catalogues/form-values';
 import { formatNumber } from '@/features/studies/quantity-format';
@@ -18,6 +18,7 @@ export type ExponentFitProps = {
 
 /** A second still-air rating of the same sink (a maker's curve read at another rise), fitted to n. */
 export function ExponentFit({ rthKPerW, referenceRiseK, onUse }: ExponentFitProps) {
+  const wide = useIsWide();
   const [open, setOpen] = useState(false);
   const [rth, setRth] = useState('');
   const [rise, setRise] = useState('');
@@ -30,11 +31,11 @@ export function ExponentFit({ rthKPerW, referenceRiseK, onUse }: ExponentFitProp
       <Text variant="label" tone="muted">
         Second still-air rating of this sink
       </Text>
-      <View style={styles.row}>
-        <View style={styles.cell}>
+      <View style={styles.fields}>
+        <View style={[styles.cell, wide && styles.half]}>
           <TextField label="Rθsa (K/W)" accessibilityLabel="Rθsa of the second rating, K/W" value={rth} inputMode="decimal" onChangeText={setRth} error={fit.kind === 'bad' && fit.field === 'rthKPerW' ? fit.message : undefined} />
         </View>
-        <View style={styles.cell}>
+        <View style={[styles.cell, wide && styles.half]}>
           <TextField label="At a rise of (K)" accessibilityLabel="Rise of the second rating, K" value={rise} inputMode="decimal" onChangeText={setRise} error={fit.kind === 'bad' && fit.field === 'riseK' ? fit.message : undefined} />
         </View>
       </View>
@@ -59,5 +60,8 @@ const styles = StyleSheet.create({
   start: { alignSelf: 'flex-start' },
   wrap: { gap: spacing.sm },
   row: { flexDirection: 'row', flexWrap: 'wrap', alignItems: 'flex-start', gap: spacing.sm },
-  cell: { flexGrow: 1, flexBasis: 140 },
+  // Lined up with the form's two-column grid on wide screens.
+  fields: { flexDirection: 'row', flexWrap: 'wrap', columnGap: spacing.md, rowGap: spacing.md },
+  cell: { width: '100%' },
+  half: { width: '48%' },
 });

@@ -59,7 +59,7 @@ export function HeatsinkForm({ initial, id, teamId, onSaved, onCancel }: Heatsin
   const errors = form.errors as Record<string, string | undefined>;
   const shown = (path: string, touched: boolean) => (touched || form.submitCount > 0 ? errors[path] : undefined) ?? serverFields[path];
 
-  const field = (key: TextKey, label: string, opts: { unit?: string; hint?: string; multiline?: boolean; numeric?: boolean } = {}) => (
+  const field = (key: TextKey, label: string, opts: { unit?: string; hint?: string; placeholder?: string; multiline?: boolean; numeric?: boolean } = {}) => (
     <View style={[styles.field, wide && !opts.multiline && key !== 'name' && styles.half]}>
       <TextField
         label={opts.unit ? `${label} (${opts.unit})` : label}
@@ -68,6 +68,7 @@ export function HeatsinkForm({ initial, id, teamId, onSaved, onCancel }: Heatsin
         onBlur={form.handleBlur(key)}
         error={shown(PATH[key] ?? key, Boolean(form.touched[key]))}
         hint={opts.hint}
+        placeholder={opts.placeholder}
         multiline={opts.multiline}
         inputMode={opts.numeric === false || opts.multiline ? undefined : 'decimal'}
       />
@@ -85,7 +86,8 @@ export function HeatsinkForm({ initial, id, teamId, onSaved, onCancel }: Heatsin
         {field('rthKPerW', 'Rθsa in still air', { unit: 'K/W' })}
         {field('referenceRiseK', 'Reference rise', { unit: 'K', hint: 'The sink rise above ambient the still-air Rθsa is rated at.' })}
         {field('convectionExponent', 'Convection exponent n', {
-          hint: 'How still-air Rθsa falls as the sink runs hotter: Rθsa × (reference rise / rise)^n, n from 0 to 1. Empty for 1/4, laminar natural convection; higher for turbulent flow (1/3) or a sink that sheds much by radiation.',
+          placeholder: '1/4 (default)',
+          hint: 'How still-air Rθsa falls as the sink runs hotter: Rθsa × (reference rise / rise)^n, n from 0 to 1. Empty for 1/4, laminar natural convection; about 1/3 for turbulent flow. Radiation or a maker’s curve may call for another n: fit it from two ratings.',
         })}
       </View>
       <ExponentFit rthKPerW={form.values.rthKPerW} referenceRiseK={form.values.referenceRiseK} onUse={(text) => form.setFieldValue('convectionExponent', text)} />
