@@ -187,6 +187,23 @@ describe('heatsink catalogue', () => {
     expect(puts[0].convectionExponent).toBe(0.333);
   });
 
+  it('offers no fit when the second rating gives n outside 0…1 or repeats the reference rise', async () => {
+    routeApi(mockedApi, {
+      'GET /session': () => ok(sessionFor('designer')),
+      'GET /heatsinks/1': () => ok({ item: SINKS[0] }),
+    });
+    renderApp('/heatsinks/1/edit');
+    fireEvent.press(await screen.findByRole('button', { name: 'Fit n from a second still-air rating' }));
+    // 1.1 K/W at 75 K and 1.2 K/W at 150 K: Rθsa rising with the rise, n = ln(1.1/1.2)/ln 2 = −0.126.
+    fireEvent.changeText(screen.getByLabelText('Rθsa of the second rating, K/W'), '1.2');
+    fireEvent.changeText(screen.getByLabelText('Rise of the second rating, K'), '150');
+    expect(await screen.findByText('n = -0.126 lies outside 0…1: check both ratings (Rθsa should fall as the rise grows).')).toBeVisible();
+    expect(screen.queryByRole('button', { name: /^Use n = / })).toBeNull();
+    fireEvent.changeText(screen.getByLabelText('Rise of the second rating, K'), '75');
+    expect(await screen.findByText('Needs a rise other than the reference rise')).toBeVisible();
+    expect(screen.queryByRole('button', { name: /^Use n = / })).toBeNull();
+  });
+
   it('lists every row problem of a refused import and says that nothing was saved', async () => {
     const details = [
       { path: 'row 3, Rth (K/W)', row: 3, column: 'Rth (K/W)', message: '"abc" is not a thermal resistance' },
