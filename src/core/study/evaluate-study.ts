@@ -33,6 +33,16 @@ export type EvaluateOptions = {
   maxStretches?: number;
   /** Use the event-driven path even for a linear study (cross-checks). */
   forceEventDriven?: boolean;
+  /**
+   * The case temperature an SOA operating point is checked at. 'stretch' (default): the highest
+   * during its own stretch. 'peak': its device's highest of the whole run, which needs no search
+   * per stretch; the allowed current only falls as the case warms (derating), so a point that
+   * passes there passes at its stretch's temperature too. When every point passes so, the result
+   * says so with those (conservative) case temperatures and margins; otherwise, or when points
+   * had to be dropped to bound memory, the study is evaluated again with 'stretch' and that
+   * result is returned. For a verdict: pass or fail is the same either way.
+   */
+  soaCaseTemperature?: 'stretch' | 'peak';
 };
 
 /** Logs a tap change where the selection moved at the start of a segment. */
@@ -96,14 +106,17 @@ export function evaluateStudy(written: StudyDocument, options: EvaluateOptions =
   const history = doc.lifetime ? createJunctionHistory(doc.devices.length, doc.profile.periodic ? passDurationS(doc) : total, doc.lifetime.arrhenius) : null;
   const observer = createObserver(sm, { bucketS, bucketCount, series: seriesPoints > 0, maxRows: boundaryRows, history });
   const events = createEventLog();
-  const soa = createSoaTracker(sm);
+  const atPeak = options.soaCaseTemperature === 'peak';
+  const soa = createSoaTracker(sm, !atPeak);
   const runner = makeRunner(sm, batch, observer, events, soa);
   runner.reset(T0, on0);
   const run = runPasses(doc, runner, ambient, doc.profile.repeat, bucketS, bucketCount, rail ? tapChangeLogger(rail, events) : undefined);
   soa?.finish(run.endS);
   if (periodic && batch) periodic.residualK = maxDifference(runner.T, T0, sm.dynamicNodes);
+  // The case is the odd watch slot of its device (junction, case, …).
+  if (soa && atPeak) soa.devices.forEach((d, k) => soa.accumulators[k].raiseCase(observer.peakC[2 * d + 1]));
 
-  return assembleResult({
+  const result = assembleResult({
     sm,
     observer,
     events,
@@ -118,4 +131,8 @@ export function evaluateStudy(written: StudyDocument, options: EvaluateOptions =
     site: sited?.site,
     history,
   });
+  if (soa && atPeak && (soa.accumulators.some((a) => a.droppedPoints > 0) || Object.values(result.soa).some((r) => !r.passed))) {
+    return evaluateStudy(written, { ...options, soaCaseTemperature: 'stretch' });
+  }
+  return result;
 }

@@ -17,6 +17,8 @@ export type SoaAccumulator = {
   droppedFailed: number;
   /** Stretches that need the MOSFET linear-mode warning, the first one's start and the core's message. */
   linearMode: { stretches: number; firstTimeS: number; message: string };
+  /** Sets every merged point's case temperature to at least caseC. */
+  raiseCase(caseC: number): void;
 };
 
 /**
@@ -96,6 +98,9 @@ export function createSoaAccumulator(model: SoaModel, check: (points: SoaOperati
     droppedPoints: 0,
     droppedFailed: 0,
     linearMode: { stretches: 0, firstTimeS: Infinity, message: '' },
+    raiseCase(caseC) {
+      for (const p of merged) if (p.caseC < caseC) p.caseC = caseC;
+    },
   };
 
   function add(s: SoaStretch): void {

@@ -24,7 +24,12 @@ export type SoaTracker = {
   finish(endS: number): void;
 };
 
-export function createSoaTracker(sm: StudyModel): SoaTracker | null {
+/**
+ * `stretchCase` false: a stretch's case temperature is left at its start value instead of its
+ * highest (no search): for a caller that checks every point at the device's peak case
+ * temperature afterwards (raiseCase), which is hotter still.
+ */
+export function createSoaTracker(sm: StudyModel, stretchCase = true): SoaTracker | null {
   const { doc } = sm;
   const devices = doc.devices.flatMap((d, i) => (d.soa ? [i] : []));
   if (devices.length === 0) return null;
@@ -68,6 +73,7 @@ export function createSoaTracker(sm: StudyModel): SoaTracker | null {
 
   /** Highest case temperature of the piece, above `atLeast` (else atLeast): the modal bound where it is tight, else the exact search. */
   function caseMax(node: number, atLeast: number): number {
+    if (!stretchCase) return Math.max(atLeast, pieceT[node]);
     const model = pieceModel!;
     const bounds = boundsFor(model);
     if (!loaded) bounds.load(pieceT, pieceU, pieceH);
