@@ -35,16 +35,19 @@ export function solveDocument(raw: unknown, options: SolveOptions = {}, ahead?: 
   } catch (error) {
     return { kind: 'invalid', message: messageOf(error) };
   }
+  // The verdict alone checks SOA points at each device's peak case temperature: the same pass
+  // or fail for less work (evaluateStudy's soaCaseTemperature). Where the verdict goes ahead of
+  // a full result solved apart from the page, it is solved so first, then the full result.
+  const verdictSolve = () => verdictSummary(evaluateStudy(document, { maxStretches: INTERACTIVE_MAX_STRETCHES, seriesPoints: 0, soaCaseTemperature: 'peak' }));
   let result: StudyResult;
   try {
+    if (options.verdictOnly) return { kind: 'verdict', summary: verdictSolve() };
+    if (ahead) ahead(verdictSolve());
     result = evaluateStudy(document, { maxStretches: INTERACTIVE_MAX_STRETCHES, ...(options.seriesPoints !== undefined ? { seriesPoints: options.seriesPoints } : {}) });
   } catch (error) {
     return { kind: 'failed', message: messageOf(error) };
   }
-  const summary = verdictSummary(result);
-  if (options.verdictOnly) return { kind: 'verdict', summary };
-  ahead?.(summary);
-  return { kind: 'ok', summary, result };
+  return { kind: 'ok', summary: verdictSummary(result), result };
 }
 
 /**
