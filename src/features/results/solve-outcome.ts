@@ -86,4 +86,4 @@ export function receivedDocument(request: SolveRequest, before: unknown): unknow
  * The verdict line sent ahead of the outcome (`verdictFirst`), or the outcome; `solveMs`: how
  * long the worker took to parse and solve, ms.
  */
-export type SolveReply = { id: number; ahead: VerdictSummary } | { id: number; outcome: SolveOutcome; solveMs?: number };
+export type SolveReply = { id: number; ahead: VerdictSummary; solveMs?: number } | { id: number; outcome: SolveOutcome; solveMs?: number };

@@ -20,6 +20,6 @@ scope.onmessage = (event) => {
   const raw = receivedDocument(event.data, before);
   before = raw;
   const start = performance.now();
-  const outcome = solveDocument(raw, options, options.verdictFirst ? (ahead) => scope.postMessage({ id, ahead }) : undefined, parsed);
+  const outcome = solveDocument(raw, options, options.verdictFirst ? (ahead) => scope.postMessage({ id, ahead, solveMs: performance.now() - start }) : undefined, parsed);
   scope.postMessage({ id, outcome, solveMs: performance.now() - start });
 };

@@ -23,10 +23,13 @@ const SPARE_DELAY_MS = 250;
 
 const now = () => globalThis.performance?.now() ?? Date.now();
 
-/** A User Timing entry per landed solve (`junctura:solve`: request to reply, the worker's own time as detail), for profiling in the browser. */
-function mark(sentAt: number, solveMs: number | undefined): void {
+/**
+ * A User Timing entry per landed solve (`junctura:solve`: request to reply, the worker's own
+ * time as detail) and per verdict line sent ahead of it (`junctura:verdict`), for profiling in the browser.
+ */
+function mark(sentAt: number, solveMs: number | undefined, name = 'junctura:solve'): void {
   try {
-    globalThis.performance?.measure?.('junctura:solve', { start: sentAt, end: now(), detail: { solveMs } });
+    globalThis.performance?.measure?.(name, { start: sentAt, end: now(), detail: { solveMs } });
   } catch {
     // User Timing Level 3 missing: nothing to record.
   }
@@ -108,7 +111,10 @@ export function workerChannel(start: () => WorkerLike | null): SolverChannel {
       if (worker !== current) return;
       const reply = event.data;
       if ('ahead' in reply) {
-        if (reply.id === latest) ahead?.(reply.ahead);
+        if (reply.id === latest) {
+          mark(sentAt, reply.solveMs, 'junctura:verdict');
+          ahead?.(reply.ahead);
+        }
         return;
       }
       if (reply.solveMs !== undefined) lastSolveMs = reply.solveMs;
