@@ -66,6 +66,14 @@ class FakeWorker implements WorkerLike {
   }
 }
 
+/** The two workers of a verdict-first result: the full result's and the verdict line's (asked for verdicts only). */
+function byRole(): { full: FakeWorker; line: FakeWorker } {
+  const line = FakeWorker.made.find((w) => w.requests[0]?.options.verdictOnly === true);
+  const full = FakeWorker.made.find((w) => w !== line);
+  if (!line || !full) throw new Error(`expected a full-result worker and a verdict worker, got ${FakeWorker.made.length} workers`);
+  return { full, line };
+}
+
 const peakOf = (outcome: SolveOutcome) => (outcome.kind === 'ok' ? outcome.result.devices.Q1.peakJunctionC : NaN);
 
 describe('solving off the render path', () => {
@@ -198,15 +206,17 @@ describe('solving off the render path', () => {
       const first = study(10);
       const second = study(100);
       const { result, rerender } = renderHook<StudyResultState, { raw: object }>(({ raw }) => useStudyResult(raw, 0, true), { initialProps: { raw: first } });
-      await act(async () => FakeWorker.made[0].answer(0));
+      // The verdict line has a worker of its own beside the full result's.
+      const { full, line } = byRole();
+      expect(FakeWorker.made).toHaveLength(2);
+      await act(async () => {
+        line.answer(0);
+        full.answer(0);
+      });
       expect(result.current.kind).toBe('ok');
       rerender({ raw: second });
-      const worker = FakeWorker.made[0];
-      // Hold the full result back: the verdict line alone arrives first.
-      const full = worker.onmessage!;
-      let held: SolveReply | null = null;
-      worker.onmessage = (event) => ('ahead' in event.data ? full(event) : (held = event.data));
-      await act(async () => worker.answer(1));
+      // The verdict line's worker answers first; the full result is still on its way.
+      await act(async () => line.answer(1));
       const early = result.current;
       // Tj = 25 + 100 W × 2 K/W = 225 °C, above the 130 °C target: the line fails while the curves still show 10 W (Ohm's law for heat, common practice).
       expect(early.kind).toBe('verdict');
@@ -214,7 +224,7 @@ describe('solving off the render path', () => {
       expect(early.summary.verdict.passes).toBe(false);
       expect(early.updating).toBe(true);
       expect(early.previous?.devices.Q1.peakJunctionC).toBeCloseTo(steadyJunctionC(10), 3);
-      await act(async () => full({ data: held! }));
+      await act(async () => full.answer(1));
       const landed = result.current;
       expect(landed.kind === 'ok' && landed.result.devices.Q1.peakJunctionC).toBeCloseTo(steadyJunctionC(100), 3);
       expect(landed.kind === 'ok' && landed.updating).toBe(false);
@@ -250,20 +260,20 @@ describe('solving off the render path', () => {
     mockChannel = () => workerChannel(() => new FakeWorker());
     try {
       const view = render(<StudyResults document={study(10)} seriesPoints={50} verdictFirst />);
-      await act(async () => FakeWorker.made[0].answer(0));
+      const { full, line } = byRole();
+      await act(async () => {
+        line.answer(0);
+        full.answer(0);
+      });
       // Tj = 25 + 10 W × 2 K/W = 45 °C (Ohm's law for heat, common practice).
       expect(within(screen.getByLabelText('Devices')).getByText('45\u00a0°C')).toBeVisible();
       view.rerender(<StudyResults document={study(100)} seriesPoints={50} verdictFirst />);
-      const worker = FakeWorker.made[0];
-      const full = worker.onmessage!;
-      let held: SolveReply | null = null;
-      worker.onmessage = (event) => ('ahead' in event.data ? full(event) : (held = event.data));
-      await act(async () => worker.answer(1));
+      await act(async () => line.answer(1));
       // Tj = 25 + 100 W × 2 K/W = 225 °C, 95 K over the 130 °C target: the verdict says so while the table still shows the last result.
       expect(screen.getByText(/^Fails: Q1 exceeds its 130\s°C target by 95\sK/)).toBeVisible();
       expect(within(screen.getByLabelText('Devices')).getByText('45\u00a0°C')).toBeVisible();
       expect(screen.getByText('Updating with your latest edit…')).toBeVisible();
-      await act(async () => full({ data: held! }));
+      await act(async () => full.answer(1));
       expect(within(screen.getByLabelText('Devices')).getByText('225\u00a0°C')).toBeVisible();
       expect(screen.queryByText('Updating with your latest edit…')).toBeNull();
     } finally {

@@ -40,18 +40,29 @@ function isEmpty(raw: unknown): raw is null | undefined {
  */
 export function useStudyResult(raw: unknown, seriesPoints?: number, verdictFirst = false): StudyResultState {
   const key = typeof raw === 'object' && raw !== null && !isEmpty(raw) ? raw : null;
-  const options = useMemo(() => ({ ...(seriesPoints === undefined ? {} : { seriesPoints }), ...(verdictFirst ? { verdictFirst } : {}) }), [seriesPoints, verdictFirst]);
+  const options = useMemo(() => (seriesPoints === undefined ? {} : { seriesPoints }), [seriesPoints]);
   const { solved, known, remember } = seriesPoints === undefined ? DEFAULT_CACHE : cacheFor(seriesPoints);
   const state = useSolve(key, options, true, known, remember);
+  // With verdictFirst the verdict line has a solver (a worker) of its own: it is not held up
+  // behind the full result of an earlier edit, and a newer edit never has to end a busy worker
+  // to get its verdict. A full result known already answers it too.
+  const verdict = useSolve(key, VERDICT_ONLY, verdictFirst, (doc) => known(doc) ?? VERDICTS.get(doc), (doc, outcome) => void VERDICTS.set(doc, outcome));
 
   if (isEmpty(raw)) return { kind: 'empty' };
   if (key === null) return { kind: 'invalid', message: 'the study document must be a JSON object' };
   const cached = solved.get(key);
   if (cached) return asState(cached, false);
-  if (state.ahead) return { kind: 'verdict', summary: state.ahead, previous: state.outcome?.kind === 'ok' ? state.outcome.result : null, updating: true };
+  const line = verdictFirst && verdict.solvedFor === key ? verdict.outcome : null;
+  if (line && (line.kind === 'verdict' || line.kind === 'ok') && state.solvedFor !== key) {
+    return { kind: 'verdict', summary: line.summary, previous: state.outcome?.kind === 'ok' ? state.outcome.result : null, updating: true };
+  }
   if (state.outcome) return asState(state.outcome, state.updating);
   return { kind: 'solving' };
 }
+
+const VERDICT_ONLY = { verdictOnly: true } as const;
+/** Verdict lines by document object, for the verdict solver of useStudyResult. */
+const VERDICTS = new WeakMap<object, SolveOutcome>();
 
 function asState(outcome: SolveOutcome, updating: boolean): StudyResultState {
   // Not asked for here (`verdictOnly`), but a verdict-only outcome is complete as it is.
