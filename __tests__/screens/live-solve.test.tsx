@@ -66,12 +66,17 @@ class FakeWorker implements WorkerLike {
   }
 }
 
-/** The two workers of a verdict-first result: the full result's and the verdict line's (asked for verdicts only). */
-function byRole(): { full: FakeWorker; line: FakeWorker } {
+/** The workers of a verdict-first result: the verdict line's (asked for verdicts only) and, once started, the full result's. */
+function lineWorker(): FakeWorker {
   const line = FakeWorker.made.find((w) => w.requests[0]?.options.verdictOnly === true);
+  if (!line) throw new Error('expected a worker for the verdict line');
+  return line;
+}
+function fullWorker(): FakeWorker {
+  const line = lineWorker();
   const full = FakeWorker.made.find((w) => w !== line);
-  if (!line || !full) throw new Error(`expected a full-result worker and a verdict worker, got ${FakeWorker.made.length} workers`);
-  return { full, line };
+  if (!full) throw new Error('expected a worker for the full result');
+  return full;
 }
 
 const peakOf = (outcome: SolveOutcome) => (outcome.kind === 'ok' ? outcome.result.devices.Q1.peakJunctionC : NaN);
@@ -206,17 +211,19 @@ describe('solving off the render path', () => {
       const first = study(10);
       const second = study(100);
       const { result, rerender } = renderHook<StudyResultState, { raw: object }>(({ raw }) => useStudyResult(raw, 0, true), { initialProps: { raw: first } });
-      // The verdict line has a worker of its own beside the full result's.
-      const { full, line } = byRole();
-      expect(FakeWorker.made).toHaveLength(2);
-      await act(async () => {
-        line.answer(0);
-        full.answer(0);
-      });
+      // The verdict line has a worker of its own; the full result's starts once the line is in.
+      const line = lineWorker();
+      expect(FakeWorker.made).toHaveLength(1);
+      await act(async () => line.answer(0));
+      const full = fullWorker();
+      expect(full.requests).toHaveLength(1);
+      await act(async () => full.answer(0));
       expect(result.current.kind).toBe('ok');
       rerender({ raw: second });
-      // The verdict line's worker answers first; the full result is still on its way.
+      // The verdict line's worker answers first; the full result is asked for only then.
+      expect(full.requests).toHaveLength(1);
       await act(async () => line.answer(1));
+      expect(full.requests).toHaveLength(2);
       const early = result.current;
       // Tj = 25 + 100 W × 2 K/W = 225 °C, above the 130 °C target: the line fails while the curves still show 10 W (Ohm's law for heat, common practice).
       expect(early.kind).toBe('verdict');
@@ -260,11 +267,10 @@ describe('solving off the render path', () => {
     mockChannel = () => workerChannel(() => new FakeWorker());
     try {
       const view = render(<StudyResults document={study(10)} seriesPoints={50} verdictFirst />);
-      const { full, line } = byRole();
-      await act(async () => {
-        line.answer(0);
-        full.answer(0);
-      });
+      const line = lineWorker();
+      await act(async () => line.answer(0));
+      const full = fullWorker();
+      await act(async () => full.answer(0));
       // Tj = 25 + 10 W × 2 K/W = 45 °C (Ohm's law for heat, common practice).
       expect(within(screen.getByLabelText('Devices')).getByText('45\u00a0°C')).toBeVisible();
       view.rerender(<StudyResults document={study(100)} seriesPoints={50} verdictFirst />);

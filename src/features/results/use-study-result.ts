@@ -42,11 +42,12 @@ export function useStudyResult(raw: unknown, seriesPoints?: number, verdictFirst
   const key = typeof raw === 'object' && raw !== null && !isEmpty(raw) ? raw : null;
   const options = useMemo(() => (seriesPoints === undefined ? {} : { seriesPoints }), [seriesPoints]);
   const { solved, known, remember } = seriesPoints === undefined ? DEFAULT_CACHE : cacheFor(seriesPoints);
-  const state = useSolve(key, options, true, known, remember);
   // With verdictFirst the verdict line has a solver (a worker) of its own: it is not held up
   // behind the full result of an earlier edit, and a newer edit never has to end a busy worker
-  // to get its verdict. A full result known already answers it too.
+  // to get its verdict. A full result known already answers it too. The full solve of a
+  // document starts once its verdict line is in, so the two do not share the processor.
   const verdict = useSolve(key, VERDICT_ONLY, verdictFirst, (doc) => known(doc) ?? VERDICTS.get(doc), (doc, outcome) => void VERDICTS.set(doc, outcome));
+  const state = useSolve(key, options, !verdictFirst || verdict.solvedFor === key, known, remember);
 
   if (isEmpty(raw)) return { kind: 'empty' };
   if (key === null) return { kind: 'invalid', message: 'the study document must be a JSON object' };
