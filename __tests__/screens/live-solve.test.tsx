@@ -240,6 +240,34 @@ describe('solving off the render path', () => {
     }
   });
 
+  it('never shows an older full result as current while a newer verdict line is known (verdictFirst)', async () => {
+    mockChannel = () => workerChannel(() => new FakeWorker());
+    try {
+      const [a, b, c] = [study(10), study(100), study(20)];
+      const { result, rerender } = renderHook<StudyResultState, { raw: object }>(({ raw }) => useStudyResult(raw, 0, true), { initialProps: { raw: a } });
+      const line = lineWorker();
+      await act(async () => line.answer(0));
+      const full = fullWorker();
+      await act(async () => full.answer(0));
+      rerender({ raw: b });
+      await act(async () => line.answer(1));
+      // b's full solve is asked for; c comes before it lands.
+      rerender({ raw: c });
+      const between = result.current;
+      // b's line (Tj = 225 °C fails, Ohm's law for heat, common practice) stands, still updating; not a's result (45 °C, passes) as if current.
+      expect(between.kind).toBe('verdict');
+      expect(between.kind === 'verdict' && between.summary.verdict.passes).toBe(false);
+      expect(between.kind === 'verdict' && between.updating).toBe(true);
+      await act(async () => line.answer(2));
+      const lineC = result.current;
+      // c: Tj = 25 + 20 W × 2 K/W = 65 °C, passes.
+      expect(lineC.kind === 'verdict' && lineC.summary.verdict.passes).toBe(true);
+      expect(lineC.kind === 'verdict' && lineC.updating).toBe(true);
+    } finally {
+      mockChannel = null;
+    }
+  });
+
   it('does not copy the parts an edit left alone to the worker again, and solves the same', () => {
     const channel = workerChannel(() => new FakeWorker());
     const seen: number[] = [];

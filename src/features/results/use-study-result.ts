@@ -53,9 +53,15 @@ export function useStudyResult(raw: unknown, seriesPoints?: number, verdictFirst
   if (key === null) return { kind: 'invalid', message: 'the study document must be a JSON object' };
   const cached = solved.get(key);
   if (cached) return asState(cached, false);
-  const line = verdictFirst && verdict.solvedFor === key ? verdict.outcome : null;
-  if (line && (line.kind === 'verdict' || line.kind === 'ok') && state.solvedFor !== key) {
-    return { kind: 'verdict', summary: line.summary, previous: state.outcome?.kind === 'ok' ? state.outcome.result : null, updating: true };
+  if (verdictFirst) {
+    // A document's full solve follows its verdict line, so a line for another document than
+    // the full result's is the newer of the two: shown (still updating) over the older result.
+    const line = verdict.outcome;
+    if (line && (line.kind === 'verdict' || line.kind === 'ok') && verdict.solvedFor !== state.solvedFor) {
+      return { kind: 'verdict', summary: line.summary, previous: state.outcome?.kind === 'ok' ? state.outcome.result : null, updating: true };
+    }
+    if (state.outcome) return asState(state.outcome, state.solvedFor !== key);
+    return { kind: 'solving' };
   }
   if (state.outcome) return asState(state.outcome, state.updating);
   return { kind: 'solving' };
