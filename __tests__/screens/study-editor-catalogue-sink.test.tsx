@@ -70,6 +70,21 @@ describe('a catalogue sink picked into the thermal path', () => {
     expect(await pickAndSave('Radiating plate')).toMatchObject({ id: 'S1', rthKPerW: 1.4, naturalConvection: { referenceRiseK: 75, exponent: 0.33 } });
   });
 
+  it('lists a catalogue sink’s own exponent in the picker, and none for one at the default', async () => {
+    routeApi(mockedApi, {
+      'GET /session': () => ok(sessionAs('designer')),
+      'GET /studies/21': () => ok({ study: editableStudy() }),
+      'GET /heatsinks': () => ok({ items: CATALOGUE }),
+    });
+    renderApp('/studies/21/edit');
+    await screen.findByText('Editing from version 3');
+    fireEvent.press(screen.getByRole('button', { name: /^Thermal path/ }));
+    fireEvent.press(screen.getByRole('button', { name: 'S1 from the heatsink catalogue' }));
+    await screen.findByRole('button', { name: 'Choose Radiating plate' });
+    expect(screen.getByText('1.4 K/W at 75 K · n = 0.33 · 150 g aluminium')).toBeVisible();
+    expect(screen.getByText('1.4 K/W at 75 K · 150 g aluminium')).toBeVisible();
+  });
+
   it('keeps the sink’s own exponent when the catalogue gives none', async () => {
     // The study fixture's sink states exponent 0.25, the laminar 1/4 (Incropera & DeWitt ch. 9).
     expect(await pickAndSave('Plain extrusion')).toMatchObject({ id: 'S1', rthKPerW: 1.4, naturalConvection: { referenceRiseK: 75, exponent: 0.25 } });

@@ -43,6 +43,8 @@ function switchMass(sink: RawSink, to: Mass): RawSink {
 const describeEntry = (h: CatalogueSink) =>
   [
     `${h.rthKPerW} K/W at ${h.referenceRiseK} K`,
+    // The still-air exponent when the catalogue gives one (1/4 otherwise, left unsaid).
+    h.convectionExponent != null ? `n = ${Number(h.convectionExponent.toPrecision(3))}` : null,
     h.forcedAir.length > 0 ? `forced air ${h.forcedAir.map((p) => p.airSpeedMPerS).join('/')} m/s` : null,
     h.massKg !== null ? `${Number((h.massKg * 1000).toPrecision(4))} g${h.material ? ` ${h.material}` : ''}` : null,
     h.capacityJPerK !== null ? `${h.capacityJPerK} J/K` : null,
