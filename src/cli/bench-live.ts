@@ -24,7 +24,8 @@ export function liveEditDocument(segments = LIVE_SEGMENTS): Record<string, unkno
   return { ...doc, title: `Lab supply, ${segments.toLocaleString('en')}-step log (demo data)`, profile: { segments: list } };
 }
 
-export type LiveEditTimes = { segments: number; withSoaMs: number; withoutSoaMs: number; parseMs: number; withSeriesMs: number };
+/** `verdictMs`: the verdict as the editor solves it (SOA at the peak case temperature); `withSoaMs`: SOA per stretch, as the full results. */
+export type LiveEditTimes = { segments: number; verdictMs: number; withSoaMs: number; withoutSoaMs: number; parseMs: number; withSeriesMs: number };
 
 const best = (runs: number, f: () => void): number => {
   let min = Infinity;
@@ -36,7 +37,7 @@ const best = (runs: number, f: () => void): number => {
   return min;
 };
 
-/** Best-of-5 times of parse + evaluate as the editor runs them (verdict, then the results with chart series). */
+/** Best-of-5 times of parse + evaluate as the editor runs them (the verdict line, then the results with chart series). */
 export function benchLiveEdit(): LiveEditTimes {
   const raw = liveEditDocument();
   const doc = parseStudy(raw);
@@ -47,6 +48,7 @@ export function benchLiveEdit(): LiveEditTimes {
   return {
     segments: LIVE_SEGMENTS,
     parseMs: best(5, () => parseStudy(raw)),
+    verdictMs: best(5, () => evaluateStudy(doc, { ...options, seriesPoints: 0, soaCaseTemperature: 'peak' })),
     withSoaMs: best(5, () => evaluateStudy(doc, { ...options, seriesPoints: 0 })),
     withoutSoaMs: best(5, () => evaluateStudy(withoutSoa, { ...options, seriesPoints: 0 })),
     withSeriesMs: best(5, () => evaluateStudy(doc, { ...options, seriesPoints: LIVE_SERIES_POINTS })),
