@@ -10,7 +10,7 @@ import { makeRunner, runPasses } from './run-passes';
 import { periodicStartState } from './periodic-start-state';
 import { maxDifference } from './periodic';
 import { assembleResult } from './assemble-result';
-import { selectRailTaps, type RailSelection } from './rail-selection';
+import { createRailSelectionCache, selectRailTaps, selectRailTapsCached, type RailSelection, type RailSelectionCache } from './rail-selection';
 import { createSoaTracker } from './soa-tracker';
 import type { EventLog } from './event-log';
 import type { SegmentStart } from './run-passes';
@@ -43,7 +43,16 @@ export type EvaluateOptions = {
    * result is returned. For a verdict: pass or fail is the same either way.
    */
   soaCaseTemperature?: 'stretch' | 'peak';
+  /**
+   * Work kept across evaluations by one caller (createEvaluationCache): the rail plan's tap
+   * selection for a profile, plan and pass members met before. The result is the same with
+   * or without it.
+   */
+  cache?: EvaluationCache;
 };
+
+export type EvaluationCache = { rail: RailSelectionCache };
+export const createEvaluationCache = (): EvaluationCache => ({ rail: createRailSelectionCache() });
 
 /** Logs a tap change where the selection moved at the start of a segment. */
 function tapChangeLogger(rail: RailSelection, events: EventLog): SegmentStart {
@@ -74,7 +83,7 @@ export function evaluateStudy(written: StudyDocument, options: EvaluateOptions =
 
   const sited = siteAdjusted(written);
   const atSite = sited ? sited.doc : written;
-  const rail = atSite.railPlan ? selectRailTaps(atSite) : null;
+  const rail = atSite.railPlan ? (options.cache ? selectRailTapsCached(atSite, options.cache.rail) : selectRailTaps(atSite)) : null;
   const doc = rail ? rail.doc : atSite;
   const sm = createStudyModel(doc, tolerance);
   if (options.maxStretches !== undefined) {

@@ -44,8 +44,15 @@ function mapResult(map: DissipationMap): RailMapResult {
 
 const finiteOrNull = (x: number) => (Number.isFinite(x) ? x : null);
 
+type Listing = { segments: TapSegment[]; all: boolean; warnings: string[] };
+/** Listings by selection (its taps array: a selection reused from a cache keeps it), made once each. */
+const listings = new WeakMap<Int16Array, Listing>();
+
 /** The first pass's rail segments with their taps, and a warning per tap asked for more than it can supply. */
-function listSegments(sel: RailSelection, warnings: string[]): { segments: TapSegment[]; all: boolean } {
+function listSegments(sel: RailSelection): Listing {
+  const known = listings.get(sel.taps);
+  if (known) return known;
+  const warnings: string[] = [];
   const segments: TapSegment[] = [];
   const warned = new Set<number>();
   let t = 0;
@@ -82,7 +89,9 @@ function listSegments(sel: RailSelection, warnings: string[]): { segments: TapSe
       sensedV: p.sensedV,
     });
   }
-  return { segments, all };
+  const listing = { segments, all, warnings };
+  listings.set(sel.taps, listing);
+  return listing;
 }
 
 /**
@@ -103,8 +112,8 @@ export function railPlanResult(doc: StudyDocument, sel: RailSelection, changes: 
     sink,
     ...(plan.relay ? { relay: plan.relay } : {}),
   });
-  const warnings = [...sel.warnings, ...report.warnings.map((w) => `railPlan: ${w}`)];
-  const listing = listSegments(sel, warnings);
+  const listing = listSegments(sel);
+  const warnings = [...sel.warnings, ...report.warnings.map((w) => `railPlan: ${w}`), ...listing.warnings];
   const result: RailPlanResult = {
     device: device.id,
     sensed: plan.sensed,
@@ -115,7 +124,7 @@ export function railPlanResult(doc: StudyDocument, sel: RailSelection, changes: 
     worst: report.worst,
     thresholds: report.thresholds,
     worstWithBest: report.worstWithBest,
-    selection: { segments: listing.segments, segmentsListedAll: listing.all, changes },
+    selection: { segments: [...listing.segments], segmentsListedAll: listing.all, changes },
     warnings,
   };
   if (report.requiredRsa) {

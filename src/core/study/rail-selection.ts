@@ -1,6 +1,6 @@
 import { solveOperatingPoint, type OperatingPoint, type PassMember } from '../electrical';
 import { compileRailPlan, nextTap, tapVoltage, tapWithoutHistory, type RailModel } from '../rails';
-import type { Device, ProfileSegment, RailDrive, StudyDocument, StudyRailPlan } from './types';
+import type { Device, Profile, ProfileSegment, RailDrive, StudyDocument, StudyRailPlan } from './types';
 import { MAX_EXPANDED_SEGMENTS } from './constants';
 
 /** Vin = Vtap(I) and I (the current limit depends on Vin − Vout) are iterated to a fixed point. */
@@ -29,6 +29,30 @@ export type RailSelection = {
   firstPassLength: number;
   warnings: string[];
 };
+
+/**
+ * Selections kept across evaluations of one caller (an editor solving each edit again): by
+ * parsed profile object, with the rail plan and pass members they were made for. The
+ * selection depends on nothing else, so an edit of the ambient or the sink reuses it.
+ */
+export type RailSelectionCache = { byProfile: WeakMap<Profile, { key: string; selection: RailSelection }> };
+export const createRailSelectionCache = (): RailSelectionCache => ({ byProfile: new WeakMap() });
+
+/** What a selection depends on besides the profile: the plan and each device's count and electrical model (role, Iq, dropout, current limit). */
+const selectionKey = (doc: StudyDocument): string => JSON.stringify([doc.railPlan, doc.devices.map((d) => [d.id, d.count, d.electrical ?? null])]);
+
+/**
+ * selectRailTaps through a cache: a selection made before for the same profile object, plan
+ * and pass members is reused, with `doc` the given document's (its resolved profile kept).
+ */
+export function selectRailTapsCached(doc: StudyDocument, cache: RailSelectionCache): RailSelection {
+  const key = selectionKey(doc);
+  const known = cache.byProfile.get(doc.profile);
+  if (known && known.key === key) return { ...known.selection, doc: { ...doc, profile: known.selection.doc.profile } };
+  const selection = selectRailTaps(doc);
+  cache.byProfile.set(doc.profile, { key, selection });
+  return selection;
+}
 
 const member = (d: Device): PassMember => ({
   count: d.count,
