@@ -1,4 +1,4 @@
-import { evaluateStudy, INTERACTIVE_MAX_STRETCHES, parseStudy, type ParseCache, type StudyDocument, type StudyResult } from '@/core/study';
+import { evaluateStudy, INTERACTIVE_MAX_STRETCHES, parseStudy, type EvaluationCache, type ParseCache, type StudyDocument, type StudyResult } from '@/core/study';
 
 import { verdictSummary, type VerdictSummary } from './verdict-summary';
 
@@ -29,21 +29,30 @@ const messageOf = (error: unknown) => (error instanceof Error ? error.message : 
  * (the worker's own copies), so a kept profile is not parsed again.
  */
 export function solveDocument(raw: unknown, options: SolveOptions = {}, ahead?: (summary: VerdictSummary) => void, cache?: ParseCache): SolveOutcome {
-  let document: StudyDocument;
+  const parsed = parseForSolve(raw, cache);
+  return 'document' in parsed ? solveParsed(parsed.document, options, ahead) : parsed;
+}
+
+/** The study document checked and with its defaults, or why it is invalid; `cache` as for solveDocument. */
+export function parseForSolve(raw: unknown, cache?: ParseCache): { document: StudyDocument } | { kind: 'invalid'; message: string } {
   try {
-    document = parseStudy(raw, cache);
+    return { document: parseStudy(raw, cache) };
   } catch (error) {
     return { kind: 'invalid', message: messageOf(error) };
   }
+}
+
+/** solveDocument's solve of a document already parsed; `cache` keeps work across a caller's solves (evaluateStudy's). */
+export function solveParsed(document: StudyDocument, options: SolveOptions = {}, ahead?: (summary: VerdictSummary) => void, cache?: EvaluationCache): SolveOutcome {
   // The verdict alone checks SOA points at each device's peak case temperature: the same pass
   // or fail for less work (evaluateStudy's soaCaseTemperature). Where the verdict goes ahead of
   // a full result solved apart from the page, it is solved so first, then the full result.
-  const verdictSolve = () => verdictSummary(evaluateStudy(document, { maxStretches: INTERACTIVE_MAX_STRETCHES, seriesPoints: 0, soaCaseTemperature: 'peak' }));
+  const verdictSolve = () => verdictSummary(evaluateStudy(document, { maxStretches: INTERACTIVE_MAX_STRETCHES, seriesPoints: 0, soaCaseTemperature: 'peak', cache }));
   let result: StudyResult;
   try {
     if (options.verdictOnly) return { kind: 'verdict', summary: verdictSolve() };
     if (ahead) ahead(verdictSolve());
-    result = evaluateStudy(document, { maxStretches: INTERACTIVE_MAX_STRETCHES, ...(options.seriesPoints !== undefined ? { seriesPoints: options.seriesPoints } : {}) });
+    result = evaluateStudy(document, { maxStretches: INTERACTIVE_MAX_STRETCHES, cache, ...(options.seriesPoints !== undefined ? { seriesPoints: options.seriesPoints } : {}) });
   } catch (error) {
     return { kind: 'failed', message: messageOf(error) };
   }
