@@ -58,7 +58,9 @@ async function armClock(page: Page, word: string): Promise<void> {
     document.addEventListener('input', onInput, true);
     const check = () => {
       const el = document.querySelector('[data-testid="study-verdict"]') as HTMLElement | null;
-      if (w.__editAt !== null && el?.innerText.trim().startsWith(expected)) {
+      // textContent, not innerText: innerText lays the page out at every mutation (7–9 ms in a
+      // trace of a phone-sized page), work the page itself would not do then.
+      if (w.__editAt !== null && el?.textContent?.trim().startsWith(expected)) {
         w.__doneAt = performance.now();
         observer.disconnect();
         setTimeout(() => tasks.disconnect(), 0);

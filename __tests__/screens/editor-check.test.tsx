@@ -4,7 +4,7 @@ import { setIn } from 'formik';
 import type { FieldMeta } from '@/features/study-editor/editor-context';
 import { valuesFromStudy } from '@/features/study-editor/editor-values';
 import type { EditorValues } from '@/features/study-editor/types';
-import { CHECK_DELAY_MS, useEditorCheck, type EditorCheckState } from '@/features/study-editor/use-editor-check';
+import { CHECK_DELAY_MS, INLINE_CHECK_MS, useEditorCheck, type EditorCheckState } from '@/features/study-editor/use-editor-check';
 
 import { editableStudy } from './support/editor-fixtures';
 
@@ -63,5 +63,27 @@ describe('the editor check', () => {
     await act(async () => jest.advanceTimersByTime(1));
     expect(result.current.parsed?.document.devices[0].tjMaxC).toBe(120);
     expect(problemAt(result.current)).toBeUndefined();
+  });
+
+  it('runs a quick check in the edit’s own commit, and a slow one in the next task so the edit paints first', async () => {
+    const { base, result, rerender } = renderCheck();
+    // The first check runs in a task of its own and is timed (fake timers: it takes no time).
+    await act(async () => jest.advanceTimersByTime(2 * CHECK_DELAY_MS));
+    rerender({ values: withTjMax(base, 140) });
+    expect(result.current.parsed?.document.devices[0].tjMaxC).toBe(140);
+
+    // Checks that take longer than INLINE_CHECK_MS: the next edit's check waits for the next task.
+    const clock = jest.spyOn(performance, 'now');
+    let t = 1e6;
+    clock.mockImplementation(() => (t += INLINE_CHECK_MS + 1));
+    await act(async () => jest.advanceTimersByTime(2 * CHECK_DELAY_MS));
+    rerender({ values: withTjMax(base, 130) });
+    expect(result.current.parsed?.document.devices[0].tjMaxC).toBe(130); // this check was timed slow
+    t += 10 * CHECK_DELAY_MS; // a pause before the next edit
+    rerender({ values: withTjMax(base, 120) });
+    expect(result.current.parsed?.document.devices[0].tjMaxC).toBe(130);
+    await act(async () => jest.advanceTimersByTime(0));
+    expect(result.current.parsed?.document.devices[0].tjMaxC).toBe(120);
+    clock.mockRestore();
   });
 });

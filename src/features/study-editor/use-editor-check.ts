@@ -1,5 +1,5 @@
 import { getIn, setIn } from 'formik';
-import { useEffect, useRef, useState, type RefObject } from 'react';
+import { useLayoutEffect, useRef, useState, type RefObject } from 'react';
 
 import type { StudyDocument } from '@/core/study';
 
@@ -20,6 +20,13 @@ export type EditorCheck = {
  * waiting; the keystrokes of a burst are checked once it pauses.
  */
 export const CHECK_DELAY_MS = 100;
+
+/**
+ * A check at once that took at most this long the last time (ms) runs in the edit's own
+ * commit, before the browser paints, so its document goes to the solver without waiting a
+ * frame; a longer one (a profile edit on a long log) runs in the next task, so the edit paints first.
+ */
+export const INLINE_CHECK_MS = 8;
 
 /** When the check of an edit made at `at` runs, ms from then: at once after a pause since `lastChange`, else after CHECK_DELAY_MS. */
 export const checkDelay = (at: number, lastChange: number) => (at - lastChange >= CHECK_DELAY_MS ? 0 : CHECK_DELAY_MS);
@@ -63,22 +70,34 @@ export type EditorCheckState = EditorCheck & {
 
 const sameProblems = (a: readonly Problem[], b: readonly Problem[]) => a.length === b.length && a.every((p, i) => p.field === b[i].field && p.reason === b[i].reason);
 
-/** Checks the values after each change (the fields on screen are known by then): at once after a pause, else once typing pauses. */
+/**
+ * Checks the values after each change (the fields on screen are known by then): at once after
+ * a pause (in the edit's commit when checks are quick, INLINE_CHECK_MS), else once typing pauses.
+ */
 export function useEditorCheck(values: EditorValues, fields: RefObject<Map<string, FieldMeta>>, base: EditorValues): EditorCheckState {
   const [state, setState] = useState<EditorCheckState>(() => {
     const first = checkValues(values, new Map());
     return { ...first, lastGood: first.parsed };
   });
   const lastChange = useRef(-Infinity);
-  useEffect(() => {
+  /** How long the last check took, ms (the first one runs in a task of its own). */
+  const lastCheckMs = useRef(Infinity);
+  useLayoutEffect(() => {
     const at = now();
     const delay = checkDelay(at, lastChange.current);
     lastChange.current = at;
-    const timer = setTimeout(() => {
+    const run = () => {
+      const started = now();
       const next = checkValues(values, fields.current ?? new Map(), base);
+      lastCheckMs.current = now() - started;
       // The same findings keep the same list, so the fields reading them do not draw again.
       setState((prev) => ({ ...next, problems: sameProblems(prev.problems, next.problems) ? prev.problems : next.problems, lastGood: next.parsed ?? prev.lastGood }));
-    }, delay);
+    };
+    if (delay === 0 && lastCheckMs.current <= INLINE_CHECK_MS) {
+      run();
+      return;
+    }
+    const timer = setTimeout(run, delay);
     return () => clearTimeout(timer);
   }, [values, fields, base]);
   return state;
