@@ -36,7 +36,7 @@ const DOCUMENT = {
  */
 const CATALOGUE: SinkCandidate[] = [
   { id: '1', name: 'Big extrusion', natural: { rthKPerW: 0.5, referenceRiseK: 75 }, massKg: 1.2, material: 'aluminium', volumeM3: 6e-4, price: 30 },
-  { id: '2', name: 'Mid extrusion', natural: { rthKPerW: 1, referenceRiseK: 75 }, massKg: 0.5, material: 'aluminium', volumeM3: 4e-4, price: 12 },
+  { id: '2', name: 'Mid extrusion', natural: { rthKPerW: 1, referenceRiseK: 75, exponent: 1 / 3 }, massKg: 0.5, material: 'aluminium', volumeM3: 4e-4, price: 12 },
   { id: '3', name: 'Light clip', natural: { rthKPerW: 1.6, referenceRiseK: 75 }, massKg: 0.3, material: 'aluminium', volumeM3: 1e-4, price: 15 },
   { id: '4', name: 'Tiny clip', natural: { rthKPerW: 9, referenceRiseK: 75 }, massKg: 0.02, material: 'aluminium', volumeM3: 1e-5, price: 1 },
   { id: '5', name: 'Fan-only cartridge', forcedAir: [{ airSpeedMPerS: 2, rthKPerW: 0.3 }], massKg: 0.4, material: 'aluminium' },
@@ -109,6 +109,9 @@ describe('heatsink ranking panel', () => {
     expect(within(lightest).getByText('Smallest passing')).toBeVisible();
     expect(within(table).getAllByText('Smallest passing')).toHaveLength(1);
     expect(screen.getByTestId('ranking-answer')).toHaveTextContent(/^Smallest passing sink by mass: Light clip, 300 g/);
+    // Each still-air row names its law's exponent: the catalogue's, or the laminar 1/4 filled in.
+    expect(within(screen.getByTestId('ranked-2')).getByText(/still air, n = 0\.333?, at a .* mean rise/)).toBeVisible();
+    expect(within(lightest).getByText(/still air, n = 1\/4 \(default\), at a .* mean rise/)).toBeVisible();
     // At sea level (no site) there is no site line.
     expect(screen.queryByTestId('ranking-site')).toBeNull();
 

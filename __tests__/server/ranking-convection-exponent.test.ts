@@ -44,7 +44,7 @@ beforeAll(async () => {
 });
 afterAll(() => ctx.close());
 
-type Ranked = { name: string; rsaKPerW: number; meanRiseK: number; steady: { rsaKPerW: number }; devices: { peakC: number }[] };
+type Ranked = { name: string; rsaKPerW: number; meanRiseK: number; convectionExponent: { n: number; given: boolean }; steady: { rsaKPerW: number }; devices: { peakC: number }[] };
 
 describe('ranking with a catalogue convection exponent', () => {
   it('gives the sink with n = 1/3 the lower Rθsa the scaling law predicts at a rise above its reference', async () => {
@@ -53,6 +53,10 @@ describe('ranking with a catalogue convection exponent', () => {
     const all = [...res.body.result.passing, ...res.body.result.failing] as Ranked[];
     const laminar = all.find((c) => c.name === 'Laminar default')!;
     const third = all.find((c) => c.name === 'Third power')!;
+    // Each candidate says which exponent it ran with, and whether the catalogue gave it.
+    expect(laminar.convectionExponent).toEqual({ n: 0.25, given: false });
+    expect(third.convectionExponent.given).toBe(true);
+    expect(third.convectionExponent.n).toBeCloseTo(1 / 3, 12);
 
     // Natural convection: Rθ(ΔT) = Rθref (ΔTref/ΔT)^n, laminar n = 1/4 (Incropera & DeWitt,
     // Fundamentals of Heat and Mass Transfer, ch. 9, h ∝ ΔT^(1/4); from memory). In steady

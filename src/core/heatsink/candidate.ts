@@ -29,6 +29,8 @@ export type CheckedCandidate = {
   id: string;
   name?: string;
   natural?: Required<NaturalRating>;
+  /** Whether the natural rating gave its exponent (else the laminar 1/4 was filled in). */
+  exponentGiven?: boolean;
   forcedAir?: AirPoint[];
   capacityJPerK: number;
   /** How the capacity was found. */
@@ -51,6 +53,7 @@ export function checkCandidate(value: unknown, path: string): CheckedCandidate {
       referenceRiseK: checkPositive(n.referenceRiseK, `${p}.referenceRiseK`),
       exponent: n.exponent === undefined ? LAMINAR_EXPONENT : checkRange(n.exponent, `${p}.exponent`, 0, 1),
     };
+    out.exponentGiven = n.exponent !== undefined;
   }
   if (c.forcedAir !== undefined) out.forcedAir = checkAirPoints(c.forcedAir, `${path}.forcedAir`);
   if (!out.natural && !out.forcedAir) throw new TypeError(`${path}: needs a natural rating, forced-air points, or both`);

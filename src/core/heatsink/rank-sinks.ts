@@ -29,6 +29,8 @@ export type CandidateResult = {
   /** Rθsa the profile was simulated with, K/W, and where it came from. */
   rsaKPerW?: number;
   rsaSource?: 'natural' | 'forced';
+  /** In still air: the rise exponent n of its natural-convection law, and whether the catalogue gave it (else the laminar 1/4). */
+  convectionExponent?: { n: number; given: boolean };
   /** With a site: the factor its catalogue Rθsa was multiplied by (already in rsaKPerW). */
   siteFactor?: number;
   /** Time-averaged sink rise over the profile, K. */
@@ -170,6 +172,7 @@ function rankChecked(prep: PreparedRanking, candidates: CheckedCandidate[], opti
     const mode = candidateRsaMode(c, airSpeed);
     if (mode.mode === 'none') return { ...base, reason: mode.reason };
     if (mode.note) base.notes.push(mode.note);
+    if (mode.mode === 'natural' && c.natural) base.convectionExponent = { n: c.natural.exponent, given: c.exponentGiven === true };
     if (derated) base.siteFactor = mode.mode === 'natural' ? derated.naturalFactor : derated.forcedFactor;
     let sim;
     try {

@@ -1,7 +1,7 @@
 import type { SortKey } from '@/core/heatsink';
 import { formatNumber, formatQuantity } from '@/features/studies/quantity-format';
 
-import { formatMass, formatPrice } from './heatsink-format';
+import { formatExponent, formatMass, formatPrice } from './heatsink-format';
 import type { RankedSink, RankingJson } from './ranking-types';
 
 export const SORT_LABELS: Record<SortKey, string> = { mass: 'Mass', volume: 'Volume', price: 'Price' };
@@ -30,12 +30,11 @@ export function hottest(sink: RankedSink): { id: string; peakC: number; peakTime
 /** Rθsa the profile ran with and where it came from. */
 export function rsaText(sink: RankedSink): { text: string; note?: string } {
   if (sink.rsaKPerW === undefined) return { text: '—' };
-  const note =
-    sink.rsaSource === 'forced'
-      ? 'forced air'
-      : sink.meanRiseK !== undefined
-        ? `still air at a ${formatQuantity(sink.meanRiseK, 'K')} mean rise`
-        : 'still air';
+  if (sink.rsaSource === 'forced') return { text: formatQuantity(sink.rsaKPerW, 'K/W'), note: 'forced air' };
+  // The still-air law's exponent n: the catalogue's, or the laminar 1/4 when it gives none.
+  const e = sink.convectionExponent;
+  const law = e ? `still air, n = ${formatExponent(e.given ? e.n : null)}` : 'still air';
+  const note = sink.meanRiseK !== undefined ? `${law}, at a ${formatQuantity(sink.meanRiseK, 'K')} mean rise` : law;
   return { text: formatQuantity(sink.rsaKPerW, 'K/W'), note };
 }
 
