@@ -53,4 +53,31 @@ describe('parseStudy with a parse cache', () => {
     expect(thrown(() => parseStudy(bad, cache))).toBe(thrown(() => parseStudy(bad)));
     expect(thrown(() => parseStudy(bad, cache))).toMatch(/^ambient\.temperatureC: must be a finite number/);
   });
+
+  it('reads only the edited items of a new profile array, with the uncached parse’s document and errors', () => {
+    const cache = createParseCache();
+    const raw = study();
+    raw.profile.segments.push({ repeat: 3, segments: [{ durationS: 1, powerW: { Q1: 4 } }, { durationS: 2, powerW: { Q2: 1 } }] });
+    const first = parseStudy(raw, cache);
+    // One step edited, one inserted: a new array of mostly the same item objects.
+    const segments = raw.profile.segments.slice();
+    segments[7] = { ...segments[7], powerW: { Q1: 99, Q2: 3 } };
+    segments.splice(20, 0, { durationS: 4, powerW: { Q2: 8 } });
+    const edited = { ...raw, profile: { ...raw.profile, segments } };
+    const second = parseStudy(edited, cache);
+    expect(second).toEqual(parseStudy(edited));
+    // Unedited steps are the very objects parsed before (so later caches keyed by them hold).
+    expect(second.profile.segments[6]).toBe(first.profile.segments[6]);
+    expect(second.profile.segments[7]).not.toBe(first.profile.segments[7]);
+    expect(second.profile.segments[7].powerW.Q1).toBe(99);
+    expect(second.profile.segments.length).toBe(first.profile.segments.length + 1);
+    // A bad edit names its own index, as without the cache.
+    const bad = { ...raw, profile: { ...raw.profile, segments: segments.map((x: Doc, i: number) => (i === 33 ? { ...x, durationS: -1 } : x)) } };
+    const message = thrown(() => parseStudy(bad, cache));
+    expect(message).toBe(thrown(() => parseStudy(bad)));
+    expect(message).toMatch(/^profile\.segments\[33\]\.durationS: /);
+    // Known items under other devices are read again: the device they name is gone.
+    const renamed = { ...edited, devices: raw.devices.map((d: Doc) => (d.id === 'Q2' ? { ...d, id: 'Q9' } : d)) };
+    expect(thrown(() => parseStudy(renamed, cache))).toBe(thrown(() => parseStudy(renamed)));
+  });
 });

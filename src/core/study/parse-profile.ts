@@ -118,15 +118,35 @@ function parseItem(value: unknown, path: string, ctx: Context, depth: number): v
 }
 
 /**
- * Reads `profile`, expanding nested `{ repeat, segments }` groups into a flat list. With a
- * rail plan, electrical segments leave out vinV and become `railDrive` segments.
+ * Parsed top-level profile items (a segment or a group) kept by their raw object, with the
+ * context their parse depended on (the raw devices and rail-plan presence): an edited long
+ * log is a new array of mostly the same item objects, so only the edited items are read again.
  */
-export function parseProfile(value: unknown, path: string, devices: Device[], railPlan = false): Profile {
+export type ItemCache = { items: WeakMap<object, { context: string; segments: ProfileSegment[] }>; context: string };
+
+/**
+ * Reads `profile`, expanding nested `{ repeat, segments }` groups into a flat list. With a
+ * rail plan, electrical segments leave out vinV and become `railDrive` segments. With an item
+ * cache, a raw item met before in the same context gives its parsed segments without being read.
+ */
+export function parseProfile(value: unknown, path: string, devices: Device[], railPlan = false, cache?: ItemCache): Profile {
   const obj = asObject(value, path);
   onlyKeys(obj, ['segments', 'repeat', 'periodic'], path);
   const ctx: Context = { devices: new Map(devices.map((d) => [d.id, d])), out: [], railPlan };
   const listPath = fieldPath(path, 'segments');
-  asArray(obj.segments, listPath, 1).forEach((item, i) => parseItem(item, fieldPath(listPath, i), ctx, 0));
+  const items = asArray(obj.segments, listPath, 1);
+  for (let i = 0; i < items.length; i++) {
+    const item = items[i];
+    const known = cache && item !== null && typeof item === 'object' ? cache.items.get(item) : undefined;
+    // A known item is pushed as parsed; one that would pass the segment limit is read again, for its error.
+    if (known && known.context === cache!.context && ctx.out.length + known.segments.length <= MAX_EXPANDED_SEGMENTS) {
+      for (const s of known.segments) ctx.out.push(s);
+      continue;
+    }
+    const start = ctx.out.length;
+    parseItem(item, fieldPath(listPath, i), ctx, 0);
+    if (cache && item !== null && typeof item === 'object') cache.items.set(item, { context: cache.context, segments: ctx.out.slice(start) });
+  }
   let total = 0;
   for (const s of ctx.out) total += s.durationS;
   if (!(total > 0)) rangeFail(listPath, 'the total duration must be greater than zero');

@@ -15,7 +15,7 @@ import {
 import { parseAmbient, parseEnclosure } from './parse-ambient';
 import { parseSink } from './parse-sink';
 import { parseDevice } from './parse-device';
-import { parseProfile } from './parse-profile';
+import { parseProfile, type ItemCache } from './parse-profile';
 import { parseRailPlan } from './parse-rail-plan';
 import { DEFAULT_MARGIN_K } from './constants';
 import { parseLifetime, parseSite, parseTouch } from './parse-reliability';
@@ -80,9 +80,13 @@ function checkDeviceSinks(devices: Device[], sinks: Sink[]): void {
  * while the profile is unchanged. A raw document given to parseStudy with a cache must not be
  * changed in place afterwards, and a parsed document must not be changed: the profile is shared.
  */
-export type ParseCache = { profiles: WeakMap<object, { context: string; profile: Profile }> };
+export type ParseCache = {
+  profiles: WeakMap<object, { context: string; profile: Profile }>;
+  /** Parsed profile items by raw item object: an edit of a long log reads only the items it changed. */
+  items: ItemCache['items'];
+};
 
-export const createParseCache = (): ParseCache => ({ profiles: new WeakMap() });
+export const createParseCache = (): ParseCache => ({ profiles: new WeakMap(), items: new WeakMap() });
 
 /**
  * Checks a study document (format "junctura-study", version 1) and returns it with defaults
@@ -90,7 +94,8 @@ export const createParseCache = (): ParseCache => ({ profiles: new WeakMap() });
  * field) or RangeError (value out of range, broken reference) whose message starts with the
  * field's path, e.g. `devices[1].package.terms[0].tauS: must be greater than zero, got -1 s`.
  * With a cache, a raw profile object met before with the same raw devices and rail-plan
- * presence (all its parse depends on) is not read again.
+ * presence (all its parse depends on) is not read again, nor is a raw profile item (segment
+ * or group) met before in such a profile.
  */
 export function parseStudy(json: unknown, cache?: ParseCache): StudyDocument {
   const root = asObject(json, '');
@@ -129,7 +134,7 @@ export function parseStudy(json: unknown, cache?: ParseCache): StudyDocument {
   let profile: Profile;
   if (known && known.context === context) profile = known.profile;
   else {
-    profile = parseProfile(root.profile, 'profile', devices, railPlan !== undefined);
+    profile = parseProfile(root.profile, 'profile', devices, railPlan !== undefined, cache ? { items: cache.items, context } : undefined);
     if (cache && rawProfile !== null && typeof rawProfile === 'object') cache.profiles.set(rawProfile, { context, profile });
   }
   const doc: StudyDocument = { format: STUDY_FORMAT, version: STUDY_VERSION, title, description, marginK, ambient, sinks, devices, profile };
