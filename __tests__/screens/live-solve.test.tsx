@@ -291,6 +291,39 @@ describe('solving off the render path', () => {
     expect(FakeWorker.made[1].posted[0].kept).toBeUndefined();
   });
 
+  it('sends an edit of a few profile steps as a splice of the worker’s own copy, and solves the same', () => {
+    const channel = workerChannel(() => new FakeWorker());
+    const seen: number[] = [];
+    const solve = (doc: unknown) => channel.solve(doc, {}, (o) => seen.push(peakOf(o)));
+    const long = { ...study(10), profile: { segments: Array.from({ length: 40 }, (_, i) => ({ durationS: 100 + i, powerW: { Q1: 10 } })) } };
+    solve(long);
+    const worker = FakeWorker.made[0];
+    worker.answer(0);
+    // One step edited (a new array, the other steps the same objects), then one inserted.
+    const edited = { ...long, profile: { segments: long.profile.segments.map((s, i) => (i === 12 ? { ...s, powerW: { Q1: 30 } } : s)) } };
+    solve(edited);
+    worker.answer(1);
+    const inserted = { ...edited, profile: { segments: [...edited.profile.segments.slice(0, 30), { durationS: 5, powerW: { Q1: 1 } }, ...edited.profile.segments.slice(30)] } };
+    solve(inserted);
+    worker.answer(2);
+    expect(worker.posted[1].raw).not.toHaveProperty('profile');
+    expect(worker.posted[1].profileSplice).toMatchObject({ head: 12, tail: 27, middle: [{ durationS: 112, powerW: { Q1: 30 } }], rest: {} });
+    expect(worker.posted[2].profileSplice).toMatchObject({ head: 30, tail: 10, middle: [{ durationS: 5 }] });
+    expect(worker.requests[1].raw).toEqual(edited);
+    expect(worker.requests[2].raw).toEqual(inserted);
+    // The worker's kept steps are its own objects from before (so its parse cache knows them).
+    const before = worker.requests[1].raw as typeof long;
+    expect((worker.requests[2].raw as typeof long).profile.segments[0]).toBe(before.profile.segments[0]);
+    // The spliced documents solve as the whole ones do.
+    expect(seen[1]).toBe(peakOf(solveDocument(edited)));
+    expect(seen[2]).toBe(peakOf(solveDocument(inserted)));
+    // Mostly new steps go whole.
+    const fresh = { ...inserted, profile: { segments: inserted.profile.segments.map((s) => ({ ...s })) } };
+    solve(fresh);
+    expect(worker.posted[3].profileSplice).toBeUndefined();
+    expect(worker.requests[3].raw).toEqual(fresh);
+  });
+
   it('shows the verdict line of an edit ahead of its curves and tables, which follow its full result', async () => {
     mockChannel = () => workerChannel(() => new FakeWorker());
     try {

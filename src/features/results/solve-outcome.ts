@@ -64,31 +64,66 @@ export function solveParsed(document: StudyDocument, options: SolveOptions = {},
  * `kept` names the document's top-level parts (the profile of a long log, say) that are the
  * same objects as in the request before to the same worker: they are left out of `raw` and the
  * worker takes its own copy from that request (`receivedDocument`), so an edit elsewhere does
- * not copy them across again.
+ * not copy them across again. `profile`, when an edit changed some of its items, may come as a
+ * `profileSplice` instead: the worker's copy of the items before with a middle run replaced.
  */
-export type SolveRequest = { id: number; raw: unknown; options: SolveOptions; kept?: string[] };
+export type SolveRequest = { id: number; raw: unknown; options: SolveOptions; kept?: string[]; profileSplice?: ProfileSplice };
+
+/**
+ * The profile's items as the request before's, its first `head` and last `tail` kept and
+ * `middle` between them; `rest`: the profile's other fields (repeat, periodic).
+ */
+export type ProfileSplice = { head: number; tail: number; middle: unknown[]; rest: Record<string, unknown> };
 
 type Parts = Record<string, unknown>;
 const isParts = (value: unknown): value is Parts => typeof value === 'object' && value !== null && !Array.isArray(value);
 
+/** A profile sent as a splice when at least this share of its items are the ones sent before. */
+const SPLICE_MIN_KEPT = 0.5;
+
+/** The splice that turns `before`'s profile into `profile`, when most items are the same objects. */
+function profileSplice(profile: unknown, before: unknown): ProfileSplice | null {
+  if (!isParts(profile) || !isParts(before) || !Array.isArray(profile.segments) || !Array.isArray(before.segments)) return null;
+  const now: unknown[] = profile.segments;
+  const was: unknown[] = before.segments;
+  const most = Math.min(now.length, was.length);
+  let head = 0;
+  while (head < most && now[head] === was[head]) head++;
+  let tail = 0;
+  while (tail < most - head && now[now.length - 1 - tail] === was[was.length - 1 - tail]) tail++;
+  if (head + tail < SPLICE_MIN_KEPT * now.length) return null;
+  const rest: Parts = { ...profile };
+  delete rest.segments;
+  return { head, tail, middle: now.slice(head, now.length - tail), rest };
+}
+
 /** What to post for `raw` when `before` was the document of the request before to the same worker (null for a fresh worker). */
-export function requestParts(raw: unknown, before: unknown): { raw: unknown; kept?: string[] } {
+export function requestParts(raw: unknown, before: unknown): { raw: unknown; kept?: string[]; profileSplice?: ProfileSplice } {
   if (!isParts(raw) || !isParts(before)) return { raw };
   const sent: Parts = {};
   const kept: string[] = [];
+  let splice: ProfileSplice | null = null;
   for (const [key, value] of Object.entries(raw)) {
     if (typeof value === 'object' && value !== null && before[key] === value) kept.push(key);
+    else if (key === 'profile' && (splice = profileSplice(value, before.profile)) !== null) continue;
     else sent[key] = value;
   }
-  return kept.length > 0 ? { raw: sent, kept } : { raw };
+  if (kept.length === 0 && !splice) return { raw };
+  return { raw: sent, ...(kept.length > 0 ? { kept } : {}), ...(splice ? { profileSplice: splice } : {}) };
 }
 
-/** The document a worker received: `request.raw` with its kept parts taken from the document of the request before (`before`). */
+/** The document a worker received: `request.raw` with its kept parts (and spliced profile) taken from the document of the request before (`before`). */
 export function receivedDocument(request: SolveRequest, before: unknown): unknown {
-  if (!request.kept || request.kept.length === 0) return request.raw;
+  const { kept, profileSplice: splice } = request;
+  if ((!kept || kept.length === 0) && !splice) return request.raw;
   if (!isParts(request.raw) || !isParts(before)) throw new Error('a request kept parts of a document this worker does not have');
   const raw: Parts = { ...request.raw };
-  for (const key of request.kept) raw[key] = before[key];
+  for (const key of kept ?? []) raw[key] = before[key];
+  if (splice) {
+    const was = isParts(before.profile) ? before.profile.segments : undefined;
+    if (!Array.isArray(was) || splice.head + splice.tail > was.length) throw new Error('a request spliced a profile this worker does not have');
+    raw.profile = { ...splice.rest, segments: [...was.slice(0, splice.head), ...splice.middle, ...was.slice(was.length - splice.tail)] };
+  }
   return raw;
 }
 /**
