@@ -54,10 +54,17 @@ describe('evaluateStudy with an evaluation cache', () => {
       expect(cache.rail.byProfile.get(doc.profile)!.selection).not.toBe(known);
       expect(cached).toEqual(evaluateStudy(doc, options));
     }
-    // A new profile object (an edited step) is a new entry of its own.
+    // A new profile object (an edited step) is a new entry of its own; the next one under the
+    // same plan and members shares its tap points and resolved steps (the memo).
     const segments = raw.profile.segments.map((s: Doc, i: number) => (i === 10 ? { ...s, iloadA: 2.9 } : s));
-    const doc = parseStudy({ ...raw, profile: { segments } }, parses);
+    const doc = parseStudy({ ...raw, profile: { ...raw.profile, segments } }, parses);
     expect(evaluateStudy(doc, { ...options, cache })).toEqual(evaluateStudy(doc, options));
     expect(cache.rail.byProfile.get(doc.profile)!.selection).not.toBe(known);
+    const memo = cache.rail.memo!.memo;
+    // Inserted and removed steps too.
+    const moved = [...segments.slice(0, 50), { durationS: 3, voutV: 20, iloadA: 2.5 }, ...segments.slice(50, 250)];
+    const again = parseStudy({ ...raw, profile: { ...raw.profile, segments: moved } }, parses);
+    expect(evaluateStudy(again, { ...options, cache })).toEqual(evaluateStudy(again, options));
+    expect(cache.rail.memo!.memo).toBe(memo);
   });
 });

@@ -33,10 +33,24 @@ export type RailSelection = {
 /**
  * Selections kept across evaluations of one caller (an editor solving each edit again): by
  * parsed profile object, with the rail plan and pass members they were made for. The
- * selection depends on nothing else, so an edit of the ambient or the sink reuses it.
+ * selection depends on nothing else, so an edit of the ambient or the sink reuses it. For a
+ * new profile (an edited step) under the same plan and members, the tap points by drive value
+ * and the resolved segments by parsed segment are kept (`memo`), so only new steps are solved.
  */
-export type RailSelectionCache = { byProfile: WeakMap<Profile, { key: string; selection: RailSelection }> };
-export const createRailSelectionCache = (): RailSelectionCache => ({ byProfile: new WeakMap() });
+export type RailSelectionCache = {
+  byProfile: WeakMap<Profile, { key: string; selection: RailSelection }>;
+  memo: { key: string; memo: SelectionMemo } | null;
+};
+export const createRailSelectionCache = (): RailSelectionCache => ({ byProfile: new WeakMap(), memo: null });
+
+/** Work a selection can share with others under the same plan and pass members. */
+export type SelectionMemo = {
+  /** Points by what they depend on (fed devices, Vout, Iload; then tap by index). */
+  byValue: Map<string, Map<number, Map<number, TapPoint[]>>>;
+  /** Resolved segments (railDrive turned electrical) by parsed segment, per tap. */
+  resolved: WeakMap<ProfileSegment, ProfileSegment[]>;
+};
+const createSelectionMemo = (): SelectionMemo => ({ byValue: new Map(), resolved: new WeakMap() });
 
 /** What a selection depends on besides the profile: the plan and each device's count and electrical model (role, Iq, dropout, current limit). */
 const selectionKey = (doc: StudyDocument): string => JSON.stringify([doc.railPlan, doc.devices.map((d) => [d.id, d.count, d.electrical ?? null])]);
@@ -49,7 +63,8 @@ export function selectRailTapsCached(doc: StudyDocument, cache: RailSelectionCac
   const key = selectionKey(doc);
   const known = cache.byProfile.get(doc.profile);
   if (known && known.key === key) return { ...known.selection, doc: { ...doc, profile: known.selection.doc.profile } };
-  const selection = selectRailTaps(doc);
+  if (cache.memo?.key !== key) cache.memo = { key, memo: createSelectionMemo() };
+  const selection = selectRailTaps(doc, cache.memo.memo);
   cache.byProfile.set(doc.profile, { key, selection });
   return selection;
 }
@@ -70,18 +85,15 @@ const member = (d: Device): PassMember => ({
  * and, for a periodic study, where one period ends. Selection assumes every part conducts:
  * a thermal shutdown does not move the selector.
  */
-export function selectRailTaps(doc: StudyDocument): RailSelection {
+export function selectRailTaps(doc: StudyDocument, memo: SelectionMemo = createSelectionMemo()): RailSelection {
   const plan = doc.railPlan!;
   const model = compileRailPlan(plan);
   const tapCount = model.taps.length;
   const passMembers = doc.devices.filter((d) => (d.electrical?.role ?? 'pass') === 'pass').map(member);
   const byId = new Map(doc.devices.map((d) => [d.id, d]));
-  /**
-   * Points by what they depend on (fed devices, Vout, Iload; then tap by index): profiles
-   * repeat their steps. Number keys, no key string per segment.
-   */
-  const byValue = new Map<string, Map<number, Map<number, TapPoint[]>>>();
-  const resolvedCache = new Map<ProfileSegment, ProfileSegment[]>();
+  // Points by drive value (profiles repeat their steps; number keys, no key string per
+  // segment) and resolved segments, shared with other selections under the same plan (memo).
+  const { byValue, resolved: resolvedCache } = memo;
   const warnings: string[] = [];
 
   function pointOn(segment: ProfileSegment, tap: number): TapPoint {
