@@ -42,6 +42,25 @@ function boundaries(model: SoaModel, worst: SoaPointResult, points: SoaPointResu
   return { atWorstCase: curve(worst.caseC), atReference: curve(SOA_REFERENCE_CASE_C) };
 }
 
+/**
+ * The indices of the `k` lowest margins, the earliest first among equal margins (then the lower
+ * index), in that order: a full sort's first k, found by sorting the margins alone (a typed
+ * array) for the k-th and then ordering only those at or below it.
+ */
+export function lowestMargins(margin: Float64Array, points: readonly { timeS: number }[], k: number): number[] {
+  const n = points.length;
+  const byMargin = (a: number, b: number) => margin[a] - margin[b] || points[a].timeS - points[b].timeS || a - b;
+  const all = () => Array.from({ length: n }, (_, i) => i);
+  if (n <= k) return all();
+  const sorted = margin.slice(0, n).sort();
+  const kth = sorted[k - 1];
+  // NaN sorts last in a typed array but compares as nothing: the full sort says what it says then.
+  if (Number.isNaN(kth) || Number.isNaN(sorted[n - 1])) return all().sort(byMargin).slice(0, k);
+  const within: number[] = [];
+  for (let i = 0; i < n; i++) if (margin[i] <= kth) within.push(i);
+  return within.sort(byMargin).slice(0, k);
+}
+
 /** Checks a device's merged operating points (checkOperatingPoints) and lays out the result. */
 export function deviceSoaResult(device: Device, index: number, acc: SoaAccumulator): DeviceSoaResult {
   const model = device.soa!;
@@ -50,8 +69,7 @@ export function deviceSoaResult(device: Device, index: number, acc: SoaAccumulat
   // The lowest margins (earliest first among equals) are listed, in time order; only they
   // (and the worst point) become result objects.
   const n = merged.length;
-  const order = Array.from({ length: n }, (_, k) => k);
-  const chosen = n <= MAX_LISTED_SOA_POINTS ? order : order.sort((a, b) => check.margin[a] - check.margin[b] || merged[a].timeS - merged[b].timeS).slice(0, MAX_LISTED_SOA_POINTS);
+  const chosen = lowestMargins(check.margin, merged, MAX_LISTED_SOA_POINTS);
   const made = new Map<number, SoaPointResult>();
   const resultOf = (k: number) => {
     let r = made.get(k);
