@@ -76,6 +76,14 @@ describe('parseStudy with a parse cache', () => {
     const message = thrown(() => parseStudy(bad, cache));
     expect(message).toBe(thrown(() => parseStudy(bad)));
     expect(message).toMatch(/^profile\.segments\[33\]\.durationS: /);
+    // A non-finite number in a new item, or outside the profile, is found where the uncached parse finds it.
+    for (const broken of [
+      { ...raw, profile: { ...raw.profile, segments: segments.map((x: Doc, i: number) => (i === 41 ? { ...x, durationS: Number.POSITIVE_INFINITY } : x)) } },
+      { ...edited, marginK: Number.NaN },
+    ]) {
+      expect(thrown(() => parseStudy(broken, cache))).toBe(thrown(() => parseStudy(broken)));
+    }
+    expect(thrown(() => parseStudy({ ...edited, marginK: Number.NaN }, cache))).toMatch(/^marginK: must be a finite number/);
     // Known items under other devices are read again: the device they name is gone.
     const renamed = { ...edited, devices: raw.devices.map((d: Doc) => (d.id === 'Q2' ? { ...d, id: 'Q9' } : d)) };
     expect(thrown(() => parseStudy(renamed, cache))).toBe(thrown(() => parseStudy(renamed)));

@@ -117,30 +117,39 @@ export function readId(obj: Obj, key: string, path: string): string {
 
 const MAX_DEPTH = 64;
 
+/** Objects known to hold only finite numbers (parsed before, not changed since): not walked. */
+export type KnownFinite = (value: object) => boolean;
+const noneKnown: KnownFinite = () => false;
+
 /** True when a NaN or ±Infinity sits anywhere in the value; cheap, builds no paths. */
-function hasNonFinite(value: unknown, depth: number): boolean {
+function hasNonFinite(value: unknown, depth: number, known: KnownFinite): boolean {
   if (typeof value === 'number') return !Number.isFinite(value);
   if (typeof value !== 'object' || value === null) return false;
+  if (known(value)) return false;
   if (depth > MAX_DEPTH) return true;
-  for (const item of Array.isArray(value) ? value : Object.values(value)) if (hasNonFinite(item, depth + 1)) return true;
+  for (const item of Array.isArray(value) ? value : Object.values(value)) if (hasNonFinite(item, depth + 1, known)) return true;
   return false;
 }
 
-/** Path of the first NaN or ±Infinity in the value (JavaScript callers can pass them; JSON cannot). */
-export function findNonFinite(value: unknown, path = '', depth = 0): string | undefined {
-  if (depth === 0 && !hasNonFinite(value, 0)) return undefined;
+/**
+ * Path of the first NaN or ±Infinity in the value (JavaScript callers can pass them; JSON
+ * cannot), in document order; objects `known` to be finite are passed over.
+ */
+export function findNonFinite(value: unknown, path = '', depth = 0, known: KnownFinite = noneKnown): string | undefined {
+  if (depth === 0 && !hasNonFinite(value, 0, known)) return undefined;
   if (typeof value === 'number') return Number.isFinite(value) ? undefined : path;
+  if (typeof value === 'object' && value !== null && known(value)) return undefined;
   if (depth > MAX_DEPTH) typeFail(path, `is nested more than ${MAX_DEPTH} levels deep`);
   if (Array.isArray(value)) {
     for (let i = 0; i < value.length; i++) {
-      const hit = findNonFinite(value[i], fieldPath(path, i), depth + 1);
+      const hit = findNonFinite(value[i], fieldPath(path, i), depth + 1, known);
       if (hit !== undefined) return hit;
     }
     return undefined;
   }
   if (typeof value === 'object' && value !== null) {
     for (const [key, item] of Object.entries(value)) {
-      const hit = findNonFinite(item, fieldPath(path, key), depth + 1);
+      const hit = findNonFinite(item, fieldPath(path, key), depth + 1, known);
       if (hit !== undefined) return hit;
     }
   }

@@ -107,8 +107,8 @@ export function parseStudy(json: unknown, cache?: ParseCache): StudyDocument {
   if (root.version !== STUDY_VERSION) {
     rangeFail('version', `must be ${STUDY_VERSION} (the only version this program reads), got ${JSON.stringify(root.version)}`);
   }
-  // A known profile was finite when it was parsed (and is not changed in place).
-  const nonFinite = findNonFinite(known ? withoutProfile(root) : root);
+  // A known profile or profile item was finite when it was parsed (and is not changed in place).
+  const nonFinite = known ? findNonFinite(withoutProfile(root)) : findNonFinite(root, '', 0, cache ? (v) => cache.items.has(v) : undefined);
   if (nonFinite !== undefined) rangeFail(nonFinite, 'must be a finite number, got NaN or Infinity');
   onlyKeys(root, TOP_KEYS, '');
 
