@@ -1,4 +1,5 @@
 import { lowestMargins } from '@/core/study/soa-result';
+import { mulberry32 } from '@/core/tolerance/random';
 
 /** The definition: every index sorted by (margin, time, index), the first k. */
 function bySort(margin: Float64Array, points: { timeS: number }[], k: number): number[] {
@@ -7,21 +8,10 @@ function bySort(margin: Float64Array, points: { timeS: number }[], k: number): n
   return order.sort((a, b) => margin[a] - margin[b] || points[a].timeS - points[b].timeS || a - b).slice(0, k);
 }
 
-/** mulberry32, a small seeded generator (public domain, common practice): the same cases every run. */
-function random(seed: number): () => number {
-  let a = seed >>> 0;
-  return () => {
-    a = (a + 0x6d2b79f5) >>> 0;
-    let t = a;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}
-
 describe('the lowest SOA margins listed', () => {
   it('are a full sort’s first k, ties in margin broken by time and then index', () => {
-    const next = random(7);
+    // Seeded test data: the same cases every run.
+    const next = mulberry32(7);
     for (const [n, k, levels] of [
       [5000, 500, 40],
       [5000, 500, 1e9],
