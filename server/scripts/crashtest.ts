@@ -88,7 +88,7 @@ async function main() {
       if (integrity !== 'ok' || missing > 0 || staleVersions > 0 || ackedCount === 0) failed = true;
     }
   } finally {
-    await server.stop();
+    await server.close();
   }
   if (failed) {
     console.error('FAILED: the database lost acknowledged writes or is damaged (or nothing was written)');

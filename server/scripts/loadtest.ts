@@ -106,7 +106,7 @@ async function main() {
       process.exitCode = 1;
     }
   } finally {
-    await server.stop();
+    await server.close();
   }
 }
 

@@ -15,7 +15,11 @@ export async function freePort(): Promise<number> {
   });
 }
 
-export type TestServer = { url: string; dbFile: string; child: ChildProcess; stop: (signal?: NodeJS.Signals) => Promise<void>; restart: () => Promise<void> };
+/**
+ * `stop` ends the process and keeps its database (a crash test starts it again with `restart`);
+ * `close` stops it and removes the temporary folder it made for its database, if it made one.
+ */
+export type TestServer = { url: string; dbFile: string; child: ChildProcess; stop: (signal?: NodeJS.Signals) => Promise<void>; restart: () => Promise<void>; close: () => Promise<void> };
 
 /**
  * Starts the real API server (no web export) in its own process on a free loopback port with
@@ -23,7 +27,8 @@ export type TestServer = { url: string; dbFile: string; child: ChildProcess; sto
  * (e.g. postgres://…) replaces the SQLite file; several servers may share one database.
  */
 export async function startTestServer(options: { dbFile?: string; databaseUrl?: string } = {}): Promise<TestServer> {
-  const dbFile = options.dbFile ?? path.join(fs.mkdtempSync(path.join(os.tmpdir(), 'junctura-load-')), 'load.sqlite');
+  const tmpDir = options.dbFile ? null : fs.mkdtempSync(path.join(os.tmpdir(), 'junctura-load-'));
+  const dbFile = options.dbFile ?? path.join(tmpDir!, 'load.sqlite');
   const port = await freePort();
   const url = `http://127.0.0.1:${port}`;
   const env = {
@@ -68,6 +73,10 @@ export async function startTestServer(options: { dbFile?: string; databaseUrl?: 
       child.kill(signal);
     });
   };
+  const close = async () => {
+    await stop();
+    if (tmpDir) fs.rmSync(tmpDir, { recursive: true, force: true });
+  };
   return {
     url,
     dbFile,
@@ -76,6 +85,7 @@ export async function startTestServer(options: { dbFile?: string; databaseUrl?: 
     },
     stop,
     restart: launch,
+    close,
   };
 }
 
