@@ -7,9 +7,11 @@ import type { StudyDocument } from '@/core/study';
  * fresh worker and 35–45 ms from about the tenth. So after its first solves of a long study, a
  * worker spends idle time solving a cut copy of that study (its first PRIME_SEGMENTS segments,
  * run once, with the same options) in short tasks of their own, until it has solved PRIME_RUNS of them:
- * the user's next edits then meet compiled code. A request that comes in ends priming at once;
- * at worst it waits for the one short task running. Priming is bounded per worker (PRIME_RUNS
- * and PRIME_BUDGET_MS) and its results are thrown away.
+ * the user's next edits then meet compiled code. Priming runs once per worker, in one burst
+ * bounded by PRIME_RUNS and PRIME_BUDGET_MS, and its results are thrown away. A request that
+ * comes in ends it for good: at worst the request waits for the one short task running, and a
+ * worker never primes again later, when another worker (the page's other solver) may be busy
+ * with the user's next edit.
  */
 
 /** Segments of the cut copy: about a tenth of the live-edit study, a 5–20 ms solve. */
@@ -45,9 +47,9 @@ export type PrimerHost<O> = {
 };
 
 export type Primer<O> = {
-  /** After a request's solve: primes on its document when the worker is still fresh and the study long. */
+  /** After a request's solve: primes on its document when this worker has not primed yet and the study is long. */
   solved(document: StudyDocument, options: O, solveMs: number): void;
-  /** A request came in: priming stops (and goes on after its solve, if not used up). */
+  /** A request came in: priming, if running, ends for good. */
   interrupt(): void;
   /** Priming solves run so far and the time they took, ms. */
   readonly runs: number;
@@ -58,26 +60,23 @@ export function createPrimer<O>(host: PrimerHost<O>): Primer<O> {
   let runs = 0;
   let spentMs = 0;
   let handle: unknown = null;
-  let done = false;
+  /** Priming runs once per worker: not yet, in progress, or over (used up, or ended by a request). */
+  let phase: 'idle' | 'priming' | 'over' = 'idle';
 
-  const stop = () => {
-    if (handle !== null) host.cancel(handle);
-    handle = null;
-  };
   const step = (document: StudyDocument, options: O) => {
     handle = null;
     const start = host.now();
     try {
       host.solve(document, options);
     } catch {
-      done = true;
+      phase = 'over';
       return;
     }
     const ms = host.now() - start;
     runs++;
     spentMs += ms;
     if (ms > PRIME_TASK_MAX_MS || runs >= PRIME_RUNS || spentMs >= PRIME_BUDGET_MS) {
-      done = true;
+      phase = 'over';
       return;
     }
     handle = host.schedule(() => step(document, options));
@@ -85,12 +84,17 @@ export function createPrimer<O>(host: PrimerHost<O>): Primer<O> {
 
   return {
     solved(document, options, solveMs) {
-      stop();
-      if (done || solveMs < PRIME_MIN_SOLVE_MS || document.profile.segments.length <= PRIME_SEGMENTS) return;
+      if (phase !== 'idle' || solveMs < PRIME_MIN_SOLVE_MS || document.profile.segments.length <= PRIME_SEGMENTS) return;
+      phase = 'priming';
       const cut = primingDocument(document);
       handle = host.schedule(() => step(cut, options));
     },
-    interrupt: stop,
+    interrupt() {
+      if (phase !== 'priming') return;
+      if (handle !== null) host.cancel(handle);
+      handle = null;
+      phase = 'over';
+    },
     get runs() {
       return runs;
     },
